@@ -1,0 +1,97 @@
+// Ranking fits, best first: the team's "fits" verdicts (as is or at a rate) above every computed
+// guess, then the computed score, and "does not fit" last; ties by id so the order is stable.
+import type { DanceFacts, TrackFacts } from '../domain';
+import { fitTrackToDance, prepareSettings, type FitItem, type TeamVerdict } from './fit-score';
+import type { FitSettings } from './settings';
+
+/** Verdicts by track id (or dance id); a Map or a plain object both work. */
+export type VerdictLookup =
+	| ReadonlyMap<number, TeamVerdict>
+	| Readonly<Record<number, TeamVerdict | undefined>>;
+
+/** The verdict for an id in either kind of lookup. */
+export function verdictFor(verdicts: VerdictLookup | null | undefined, id: number): TeamVerdict | null {
+	if (!verdicts) return null;
+	if (verdicts instanceof Map) return verdicts.get(id) ?? null;
+	return (verdicts as Record<number, TeamVerdict | undefined>)[id] ?? null;
+}
+
+/** 0 = the team says it fits, 1 = no verdict, 2 = the team says it does not. */
+function group(verdict: TeamVerdict | null): number {
+	if (!verdict) return 1;
+	return verdict.verdict === 'does-not-fit' ? 2 : 0;
+}
+
+/**
+ * Order n candidates by (group, score desc, id) and return the first `limit` indices. Scores are
+ * rounded to 3 decimals and lie in 0..1, so one number per candidate carries group and score.
+ */
+function order(keys: Float64Array, ids: Float64Array, limit: number): Uint32Array {
+	const n = keys.length;
+	const idx = new Uint32Array(n);
+	for (let i = 0; i < n; i++) idx[i] = i;
+	idx.sort((a, b) => keys[a] - keys[b] || ids[a] - ids[b]);
+	return limit < n ? idx.subarray(0, limit) : idx;
+}
+
+function normalLimit(limit: number | null | undefined, n: number): number {
+	if (limit == null || !Number.isFinite(limit)) return n;
+	return Math.max(0, Math.min(n, Math.floor(limit)));
+}
+
+/**
+ * The tracks that suit a dance, best first. Only the first `limit` items carry reasons and are
+ * built in full; the rest are scored without words.
+ */
+export function rankFits(
+	dance: DanceFacts,
+	tracks: readonly TrackFacts[],
+	verdictsByTrackId?: VerdictLookup | null,
+	settings?: Partial<FitSettings> | null,
+	limit?: number | null
+): FitItem[] {
+	const s = prepareSettings(settings);
+	const n = tracks.length;
+	const keys = new Float64Array(n);
+	const ids = new Float64Array(n);
+	for (let i = 0; i < n; i++) {
+		const t = tracks[i];
+		const v = verdictFor(verdictsByTrackId, t.id);
+		keys[i] = group(v) * 2 - fitTrackToDance(t, dance, v, s, false).score;
+		ids[i] = t.id;
+	}
+	const top = order(keys, ids, normalLimit(limit, n));
+	const items = new Array<FitItem>(top.length);
+	for (let k = 0; k < top.length; k++) {
+		const t = tracks[top[k]];
+		items[k] = fitTrackToDance(t, dance, verdictFor(verdictsByTrackId, t.id), s, true);
+	}
+	return items;
+}
+
+/** The dances a track suits, best first; the same rules from the track's side. */
+export function rankDancesForTrack(
+	track: TrackFacts,
+	dances: readonly DanceFacts[],
+	verdictsByDanceId?: VerdictLookup | null,
+	settings?: Partial<FitSettings> | null,
+	limit?: number | null
+): FitItem[] {
+	const s = prepareSettings(settings);
+	const n = dances.length;
+	const keys = new Float64Array(n);
+	const ids = new Float64Array(n);
+	for (let i = 0; i < n; i++) {
+		const d = dances[i];
+		const v = verdictFor(verdictsByDanceId, d.id);
+		keys[i] = group(v) * 2 - fitTrackToDance(track, d, v, s, false).score;
+		ids[i] = d.id;
+	}
+	const top = order(keys, ids, normalLimit(limit, n));
+	const items = new Array<FitItem>(top.length);
+	for (let k = 0; k < top.length; k++) {
+		const d = dances[top[k]];
+		items[k] = fitTrackToDance(track, d, verdictFor(verdictsByDanceId, d.id), s, true);
+	}
+	return items;
+}
