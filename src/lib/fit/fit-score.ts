@@ -3,7 +3,7 @@
 import type { DanceFacts, TrackFacts, Verdict } from '../domain';
 import { fitMeter } from './meter-fit';
 import { phrasingFor, type Phrasing, type PhrasingDetail } from './phrasing';
-import { bpmText, driftReason, durationText, rateText, tempoReason, wallWords } from './reasons';
+import { bpmText, driftReason, durationText, plural, rateText, tempoReason, wallWords } from './reasons';
 import { resolveFitSettings, type FitSettings } from './settings';
 import { fitTempo, RELATION_FACTOR, tempoAtRate, type TempoFit, type TempoRelation } from './tempo-fit';
 
@@ -41,8 +41,8 @@ function tempoScore(t: TempoFit, s: FitSettings, triple: boolean): number {
 	if (t.inRange) {
 		const change = Math.abs(t.rate - 1);
 		const used = bound > 0 ? Math.min(1, change / bound) : change > 0 ? 1 : 0;
-		// At the bound the tempo counts 0.6: danceable, but a direct fit is better.
-		return (1 - 0.4 * used) * relation;
+		// At the bound the tempo counts 0.7: danceable, but a direct fit is better.
+		return (1 - 0.3 * used) * relation;
 	}
 	const over = (t.distance - bound) / (2 * Math.max(bound, 0.01));
 	return OUT_OF_RANGE_TEMPO * Math.max(0, 1 - over) * relation;
@@ -130,7 +130,9 @@ export function fitTrackToDance(
 		if (p.repetitions < s.minRepetitions) length = 0.2;
 		else if (played > s.longSongS) length = Math.max(0.4, 1 - (played - s.longSongS) / s.longSongS);
 		if (words) {
-			words.push(`${p.repetitions} whole repetitions, ${Math.round(p.secondsPerRepetition * 10) / 10} s each`);
+			words.push(
+				`${plural(p.repetitions, 'whole repetition')}, ${Math.round(p.secondsPerRepetition * 10) / 10} s each`
+			);
 			if (dance.walls > 1 && p.endWall != null) words.push(`ends on ${wallWords(p.endWall, dance.walls, dance.turn)}`);
 			words.push(
 				clean

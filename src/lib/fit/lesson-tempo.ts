@@ -1,7 +1,7 @@
 // Lesson tempo: music for a teach slot, slower than the dance's range for the crowd's level
 // (DESIGN.md, "Lesson tempo"). Teaching slows music by roughly 10–15 % (REFERENCES.md, common
 // practice); the per-level split below is our reading of that practice, not a published rule.
-import type { DanceFacts, Level, TrackFacts } from '../domain';
+import { LEVEL_LABELS, type DanceFacts, type Level, type TrackFacts } from '../domain';
 import { fitTrackToDance, prepareSettings, type FitItem } from './fit-score';
 import { fitMeter } from './meter-fit';
 import { bpmText, rateText } from './reasons';
@@ -38,7 +38,12 @@ export const DEFAULT_LESSON_SETTINGS: Readonly<LessonSettings> = Object.freeze({
 export const LESSON_CAUTION =
 	'New dancers tire sooner: keep teaching blocks short, leave time for rest and water, and follow the venue’s rules on floor, footwear and sound levels.';
 
-function lessonSettings(partial?: Partial<LessonSettings> | null): LessonSettings {
+/** Settings as callers pass them: any subset, levels included. */
+export type LessonSettingsInput = Partial<Omit<LessonSettings, 'slowdownByLevel'>> & {
+	slowdownByLevel?: Partial<Record<Level, number>>;
+};
+
+function lessonSettings(partial?: LessonSettingsInput | null): LessonSettings {
 	return {
 		...DEFAULT_LESSON_SETTINGS,
 		...partial,
@@ -62,7 +67,7 @@ export interface LessonTarget {
 export function lessonTarget(
 	dance: Pick<DanceFacts, 'bpmMin' | 'bpmMax'>,
 	level: Level,
-	settings?: Partial<LessonSettings> | null
+	settings?: LessonSettingsInput | null
 ): LessonTarget {
 	const s = lessonSettings(settings);
 	const slowdown = Math.min(0.9, Math.max(0, s.slowdownByLevel[level] ?? 0));
@@ -90,7 +95,7 @@ export function lessonTracks(
 	tracks: readonly TrackFacts[],
 	level: Level,
 	verdictsByTrackId?: VerdictLookup | null,
-	settings?: Partial<LessonSettings> | null,
+	settings?: LessonSettingsInput | null,
 	fitSettings?: Partial<FitSettings> | null
 ): FitItem[] {
 	const s = lessonSettings(settings);
@@ -109,13 +114,19 @@ export function lessonTracks(
 		const item = fitTrackToDance(track, window, null, fs, true);
 		item.verdict = v ? v.verdict : null;
 		item.reasons.unshift(
-			`slow enough for a ${level.replace('-', ' ')} lesson: target ${bpmText(target.targetBpm)} BPM`
+			`slow enough for ${levelWords(level)} lesson: target ${bpmText(target.targetBpm)} BPM`
 		);
 		items.push(item);
 	}
 	return items.sort(
 		(a, b) => (a.tempo.effectiveBpm ?? 0) - (b.tempo.effectiveBpm ?? 0) || a.trackId - b.trackId
 	);
+}
+
+/** "an improver", "a beginner" — for the reasons' sentences. */
+function levelWords(level: Level): string {
+	const words = LEVEL_LABELS[level].toLowerCase();
+	return `${/^[aeiou]/.test(words) ? 'an' : 'a'} ${words}`;
 }
 
 export type LessonRate =
@@ -136,7 +147,7 @@ export function lessonRate(
 	track: TrackFacts,
 	dance: DanceFacts,
 	level: Level,
-	settings?: Partial<LessonSettings> | null
+	settings?: LessonSettingsInput | null
 ): LessonRate {
 	const s = lessonSettings(settings);
 	const { targetBpm } = lessonTarget(dance, level, s);

@@ -37,6 +37,10 @@ export function tempoReason(
 	maxRateChange: number
 ): string {
 	const range = rangeText(bpmMin, bpmMax);
+	if (!t.inRange && t.rate !== 1) {
+		const side = t.effectiveBpm < bpmMin ? 'below' : 'above';
+		return `danced at ${rateText(t.rate)} — ${bpmText(t.trackBpm)} → ${bpmText(t.effectiveBpm)} BPM, ${side} ${range}`;
+	}
 	if (!t.inRange) {
 		const side = t.effectiveBpm < bpmMin ? 'too slow' : 'too fast';
 		const how = t.relation === 'direct' ? '' : ` even ${RELATION_WORDS[t.relation]}`;
@@ -77,4 +81,9 @@ export function wallWords(wall: number, walls: 1 | 2 | 4, turn: 'left' | 'right'
 	// quarter turn the other way.
 	const side = wall === 2 ? turn : turn === 'left' ? 'right' : 'left';
 	return `wall ${wall} (a quarter turn to the ${side})`;
+}
+
+/** "1 whole repetition", "7 whole repetitions". */
+export function plural(n: number, one: string, many = `${one}s`): string {
+	return `${n} ${n === 1 ? one : many}`;
 }
