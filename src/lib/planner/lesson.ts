@@ -1,0 +1,65 @@
+// Fills the fixed slots: a lesson's teach, walkthrough and its dance at lesson tempo, and break
+// sections. These do not change during the search.
+import { danceItem, fixedItem, stretchItem } from './items';
+import type { Plan, Problem, Slot } from './model';
+import { lessonCands } from './prepare';
+
+const room = (s: Slot) => s.target - s.start;
+
+function fillLesson(problem: Problem, slots: Slot[], dance: number, used: Set<number>): void {
+	const { gapS, teachLengthMin, walkthroughLengthMin } = problem.settings;
+	const free = slots.filter((s) => s.items.length === 0);
+	const hasLockedPlay = slots.some((s) =>
+		s.items.some((i) => i.locked && i.kind === 'dance' && i.cand?.dance === dance)
+	);
+	const main = hasLockedPlay
+		? null
+		: free.reduce<Slot | null>((a, s) => (a && room(a) >= room(s) ? a : s), null);
+	for (const s of free) if (s !== main && room(s) >= 60) s.items.push(stretchItem('teach', 0));
+	if (!main) return;
+	const full = problem.dances[dance].full;
+	// Prefer a lesson track that leaves another full-tempo track for the reprise.
+	const options = lessonCands(problem, dance).filter((c) => !used.has(c.track));
+	options.sort(
+		(a, b) =>
+			Number(full.some((f) => f.track !== b.track)) - Number(full.some((f) => f.track !== a.track))
+	);
+	const teach = teachLengthMin * 60;
+	const walk = walkthroughLengthMin * 60;
+	for (const withWalk of walk > 0 ? [true, false] : [false]) {
+		for (const minTeach of [teach, Math.min(teach, 120)]) {
+			const need = minTeach + (withWalk ? walk + gapS : 0) + gapS;
+			const pick = options.find((c) => need + c.dur <= room(main));
+			if (!pick) continue;
+			main.items.push(stretchItem('teach', minTeach));
+			if (withWalk) main.items.push(fixedItem('walkthrough', walk));
+			main.items.push(danceItem(pick, true));
+			used.add(pick.track);
+			return;
+		}
+	}
+	main.items.push(stretchItem('teach', 0));
+	problem.inputViolations.push(
+		`No track fits ${problem.dances[dance].name} at lesson tempo within the lesson's time, so the lesson has no practice dance.`
+	);
+}
+
+/** Fills lesson and break slots in place; returns the tracks they use. */
+export function fillFixedSlots(problem: Problem, plan: Plan): Set<number> {
+	const used = new Set<number>();
+	for (const s of plan)
+		for (const i of s.items) if (i.cand && i.cand.track >= 0) used.add(i.cand.track);
+	problem.sections.forEach((sec, si) => {
+		const mine = plan.filter(
+			(s) => s.section === si && s.kind === 'fixed' && !s.items.some((i) => i.locked)
+		);
+		const all = plan.filter((s) => s.section === si);
+		if (sec.kind === 'break') {
+			for (const s of mine) s.items.push(stretchItem('break', 0));
+		} else if (sec.kind === 'lesson') {
+			if (sec.dance >= 0) fillLesson(problem, all, sec.dance, used);
+			else for (const s of mine) s.items.push(stretchItem('teach', 0));
+		}
+	});
+	return used;
+}

@@ -1,0 +1,360 @@
+// The objective: a weighted penalty over the laid-out plan (0 is perfect, lower is better), with
+// a large penalty for every hard rule broken so the search always prefers a feasible plan.
+import { energyOf as energyOfImport, energyTarget as energyTargetImport } from './crowd';
+import { sizeStretch as sizeStretchImport } from './layout';
+import type { Cand, Plan, Problem } from './model';
+import type { ObjectiveTerms } from './types';
+
+// Local bindings: module namespace getters are measurably slow in the search's inner loop.
+const energyOf = energyOfImport;
+const energyTarget = energyTargetImport;
+const sizeStretch = sizeStretchImport;
+
+export const HARD = 1000;
+const EPS = 1e-6;
+const EARLY_S = 30 * 60;
+const AFTER_LESSON_S = 15 * 60;
+
+export interface Evaluation {
+	total: number;
+	terms: ObjectiveTerms;
+	hardCount: number;
+}
+
+export const zeroTerms = (): ObjectiveTerms => ({
+	difficulty: 0,
+	tempo: 0,
+	energy: 0,
+	rhythm: 0,
+	phrasing: 0,
+	requests: 0,
+	mustPlay: 0,
+	lastDance: 0,
+	reprise: 0,
+	filler: 0,
+	breaks: 0,
+	hard: 0
+});
+
+/** Running state along the night, shared by the full evaluation and the greedy's look-ahead. */
+export interface Walk {
+	prevRh: string;
+	prev2Rh: string;
+	fastRun: number;
+	advRun: number;
+	sinceAdv: number;
+	prevEff: number;
+	prevE: number;
+	/** Seconds of dancing since the last rest. */
+	dancing: number;
+}
+
+export const newWalk = (): Walk => ({
+	prevRh: '',
+	prev2Rh: '',
+	fastRun: 0,
+	advRun: 0,
+	sinceAdv: 99,
+	prevEff: 0,
+	prevE: -1,
+	dancing: 0
+});
+
+export function restWalk(w: Walk): void {
+	w.prevRh = '';
+	w.prev2Rh = '';
+	w.fastRun = 0;
+	w.advRun = 0;
+	w.prevE = -1;
+	w.prevEff = 0;
+	w.dancing = 0;
+}
+
+/** First start of social dancing, for "easier early in the evening". */
+export function firstDanceStart(problem: Problem, plan: Plan): number {
+	for (const s of plan) if (s.kind === 'dance') return s.start;
+	return 0;
+}
+
+export function isAfterLesson(problem: Problem, start: number): boolean {
+	const ls = problem.lessons;
+	for (let i = 0; i < ls.length; i++) {
+		if (start >= ls[i].endS && start - ls[i].endS < AFTER_LESSON_S) return true;
+	}
+	return false;
+}
+
+export function isEarly(firstDance: number, start: number): boolean {
+	return start - firstDance < EARLY_S;
+}
+
+/** Soft cost of one social dance entry, by term, added into `into` (unweighted). The caller
+ * checks repeats and track reuse. Returns the weighted sum, with HARD for three advanced in a
+ * row. Does not change the walk. */
+export function danceCost(
+	problem: Problem,
+	w: Walk,
+	c: Cand,
+	start: number,
+	firstDance: number,
+	into: ObjectiveTerms | null
+): number {
+	const s = problem.settings;
+	const wt = s.weights;
+	const d = problem.dances[c.dance];
+	let difficulty = problem.levelCost[d.rank];
+	if (isEarly(firstDance, start) || isAfterLesson(problem, start)) {
+		difficulty += Math.max(0, d.rank - 1) * 0.8;
+	}
+	if (d.rank === 4 && w.sinceAdv < 3) difficulty += 1.5;
+	const hard = d.rank === 4 && w.advRun >= 2 ? HARD : 0;
+	let tempo = 0;
+	const fast = c.eff >= s.fastBpm;
+	if (fast && w.fastRun >= s.maxConsecutiveFast) tempo += 4;
+	if (w.prevEff > 0 && c.eff > 0 && Math.abs(c.eff - w.prevEff) < 3) tempo += 0.3;
+	const e = energyOf(c.eff);
+	const tg = energyTarget(start / problem.eveningS);
+	let energy = 2 * (e - tg) * (e - tg);
+	if (w.prevE >= 0 && Math.abs(e - w.prevE) > 0.45) energy += 0.5;
+	let rhythm = 0;
+	if (d.rhythm === w.prevRh) rhythm += d.rhythm === 'waltz' ? 3 : 1;
+	if (d.rhythm === w.prev2Rh) rhythm += 0.5;
+	const phrasing = 2 * (1 - c.score);
+	if (into) {
+		into.difficulty += difficulty;
+		into.tempo += tempo;
+		into.energy += energy;
+		into.rhythm += rhythm;
+		into.phrasing += phrasing;
+		into.hard += hard;
+	}
+	return (
+		wt.difficulty * difficulty +
+		wt.tempo * tempo +
+		wt.energy * energy +
+		wt.rhythm * rhythm +
+		wt.phrasing * phrasing +
+		hard
+	);
+}
+
+export function advanceDance(problem: Problem, w: Walk, c: Cand): void {
+	const d = problem.dances[c.dance];
+	w.prev2Rh = w.prevRh;
+	w.prevRh = d.rhythm;
+	w.fastRun = c.eff >= problem.settings.fastBpm ? w.fastRun + 1 : 0;
+	w.advRun = d.rank === 4 ? w.advRun + 1 : 0;
+	w.sinceAdv = d.rank === 4 ? 0 : w.sinceAdv + 1;
+	w.prevEff = c.eff;
+	w.prevE = energyOf(c.eff);
+}
+
+interface Scratch {
+	lastStart: Float64Array;
+	stamp: Int32Array;
+	trackUse: Int32Array;
+	trackStamp: Int32Array;
+	gen: number;
+	occDance: number[];
+	occStart: number[];
+	occRate: number[];
+	occTrack: number[];
+	buf: number[];
+}
+
+const scratches = new WeakMap<Problem, Scratch>();
+
+function scratchFor(problem: Problem): Scratch {
+	let sc = scratches.get(problem);
+	if (!sc) {
+		sc = {
+			lastStart: new Float64Array(problem.dances.length),
+			stamp: new Int32Array(problem.dances.length),
+			trackUse: new Int32Array(problem.tracks.length),
+			trackStamp: new Int32Array(problem.tracks.length),
+			gen: 0,
+			occDance: [],
+			occStart: [],
+			occRate: [],
+			occTrack: [],
+			buf: []
+		};
+		scratches.set(problem, sc);
+	}
+	sc.gen++;
+	sc.occDance.length = 0;
+	sc.occStart.length = 0;
+	sc.occRate.length = 0;
+	sc.occTrack.length = 0;
+	return sc;
+}
+
+/** Penalty for a request by where its dance was played (0 in its block, 1 when missing). */
+export function requestCost(problem: Problem, section: number, starts: number[]): number {
+	if (starts.length === 0) return 1;
+	if (section < 0) return 0;
+	const sec = problem.sections[section];
+	let best = 1;
+	for (const t of starts) {
+		const dist = t < sec.startS ? sec.startS - t : t >= sec.endS ? t - sec.endS : 0;
+		best = Math.min(best, dist === 0 ? 0 : Math.min(0.8, 0.2 + dist / 3600));
+	}
+	return best;
+}
+
+/** Penalty for when the lesson's dance comes back at full tempo, best of its plays. */
+export function repriseCost(delays: number[]): number {
+	let best = Infinity;
+	for (const delay of delays) {
+		const c =
+			delay < 900
+				? ((900 - delay) / 900) * 0.5
+				: delay > 5400
+					? Math.min(1, (delay - 5400) / 3600)
+					: 0;
+		best = Math.min(best, c);
+	}
+	return best;
+}
+
+export function evaluate(problem: Problem, plan: Plan): Evaluation {
+	const s = problem.settings;
+	const wt = s.weights;
+	const sc = scratchFor(problem);
+	const gen = sc.gen;
+	const terms = zeroTerms();
+	let hardCount = 0;
+	const hardAdd = (extra = 0) => {
+		terms.hard += HARD + extra;
+		hardCount++;
+	};
+	const window = s.repeatWindowMin * 60;
+	const breakLimit = s.breakEveryMin * 60;
+	const restGap = s.breakLengthMin * 60;
+	const w = newWalk();
+	const hist = [0, 0, 0, 0, 0];
+	const firstDance = firstDanceStart(problem, plan);
+	const lastInSection = new Map<number, Cand | null>();
+	let lastEnd = 0;
+	for (const slot of plan) {
+		sizeStretch(problem, slot);
+		let t = slot.start;
+		const items = slot.items;
+		for (let k = 0; k < items.length; k++) {
+			const it = items[k];
+			if (k > 0) t += s.gapS;
+			const start = t;
+			const end = t + it.dur;
+			if (start - lastEnd >= restGap) restWalk(w);
+			if (end > problem.eveningS + EPS && !it.locked) hardAdd(end - problem.eveningS);
+			if (it.kind === 'break') {
+				if (it.inserted) terms.breaks += 0.3 + (w.dancing < 15 * 60 ? 1 : 0);
+				restWalk(w);
+			} else if (it.kind === 'dance' || it.kind === 'walkthrough') {
+				w.dancing += it.dur;
+				if (w.dancing > breakLimit + EPS) hardAdd(Math.min(w.dancing - breakLimit, it.dur));
+			} else if (it.kind === 'announcement' && !it.locked) {
+				terms.filler += (it.dur / 60) * 0.5;
+			}
+			const c = it.cand;
+			if (it.kind === 'dance' && c && c.dance >= 0) {
+				if (!it.lesson) {
+					const d = c.dance;
+					if (sc.stamp[d] === gen && start - sc.lastStart[d] < window - EPS) hardAdd();
+					sc.stamp[d] = gen;
+					sc.lastStart[d] = start;
+					if (!it.locked) {
+						danceCost(problem, w, c, start, firstDance, terms);
+						hist[problem.dances[d].rank]++;
+					}
+					advanceDance(problem, w, c);
+				} else {
+					w.prevRh = '';
+					w.prev2Rh = '';
+				}
+				if (c.track >= 0) {
+					if (sc.trackStamp[c.track] !== gen) {
+						sc.trackStamp[c.track] = gen;
+						sc.trackUse[c.track] = 0;
+					}
+					if (++sc.trackUse[c.track] > 1) hardAdd();
+				}
+				sc.occDance.push(c.dance);
+				sc.occStart.push(it.lesson ? -1 : start);
+				sc.occRate.push(c.rate);
+				sc.occTrack.push(c.track);
+				if (slot.section >= 0 && problem.sections[slot.section].kind === 'last-dance') {
+					lastInSection.set(slot.section, it.locked ? null : c);
+				}
+			}
+			t = end;
+			lastEnd = end;
+		}
+		if (slot.lo > -Infinity) {
+			const end = items.length ? t : slot.start;
+			if (end > slot.hi + EPS) hardAdd((end - slot.hi) * 5);
+			else if (end < slot.lo - EPS) hardAdd((slot.lo - end) * 5);
+		}
+	}
+	const n = hist[0] + hist[1] + hist[2] + hist[3] + hist[4];
+	if (n > 0) {
+		const mix = problem.levelMix;
+		let l1 = 0;
+		for (let r = 0; r < 5; r++) l1 += Math.abs(hist[r] / n - mix[r]);
+		terms.difficulty += l1 * n * 0.5;
+	}
+	const startsOf = (dance: number, track: number, out: number[]) => {
+		out.length = 0;
+		for (let i = 0; i < sc.occDance.length; i++) {
+			if (
+				sc.occDance[i] === dance &&
+				sc.occStart[i] >= 0 &&
+				(track < 0 || sc.occTrack[i] === track)
+			) {
+				out.push(sc.occStart[i]);
+			}
+		}
+		return out;
+	};
+	const buf = sc.buf;
+	for (const r of problem.requests) {
+		terms.requests += r.weight * requestCost(problem, r.section, startsOf(r.dance, -1, buf));
+	}
+	for (const m of problem.must)
+		if (startsOf(m.dance, m.track, buf).length === 0) terms.mustPlay += 1;
+	problem.sections.forEach((sec, i) => {
+		if (sec.kind !== 'last-dance') return;
+		if (!lastInSection.has(i)) return void (terms.lastDance += 1);
+		const c = lastInSection.get(i);
+		if (!c) return;
+		const d = problem.dances[c.dance];
+		terms.lastDance += (d.wellKnown ? 0 : 1) + Math.max(0, d.rank - 1) * 0.5;
+	});
+	for (const l of problem.lessons) {
+		const delays: number[] = [];
+		for (let i = 0; i < sc.occDance.length; i++) {
+			if (sc.occDance[i] !== l.dance || sc.occStart[i] < l.endS - EPS) continue;
+			if (Math.abs(sc.occRate[i] - 1) <= s.fullTempoTolerance + EPS)
+				delays.push(sc.occStart[i] - l.endS);
+		}
+		if (delays.length === 0) hardAdd();
+		else terms.reprise += repriseCost(delays);
+	}
+	const weighted: ObjectiveTerms = {
+		difficulty: wt.difficulty * terms.difficulty,
+		tempo: wt.tempo * terms.tempo,
+		energy: wt.energy * terms.energy,
+		rhythm: wt.rhythm * terms.rhythm,
+		phrasing: wt.phrasing * terms.phrasing,
+		requests: wt.requests * terms.requests,
+		mustPlay: wt.mustPlay * terms.mustPlay,
+		lastDance: wt.lastDance * terms.lastDance,
+		reprise: wt.reprise * terms.reprise,
+		filler: wt.filler * terms.filler,
+		breaks: wt.breaks * terms.breaks,
+		hard: terms.hard
+	};
+	let total = 0;
+	for (const v of Object.values(weighted)) total += v;
+	return { total, terms: weighted, hardCount };
+}
