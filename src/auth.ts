@@ -1,0 +1,57 @@
+// Sign-in with Auth.js: e-mail and password (Credentials), sessions as signed JWT cookies that
+// carry the person's id. Roles are read fresh from the database on every request (hooks), so a
+// change of roles takes effect at once.
+import { SvelteKitAuth, type SvelteKitAuthConfig } from '@auth/sveltekit';
+import Credentials from '@auth/sveltekit/providers/credentials';
+import { z } from 'zod';
+import { authSecret, config } from '$lib/server/config';
+import { decoyHash, verifyPassword } from '$lib/server/passwords';
+import { findUserByEmail } from '$lib/server/users';
+
+export const credentialsSchema = z.object({
+	email: z.string().trim().toLowerCase().email('Enter an e-mail address.').max(254),
+	password: z.string().min(1, 'Enter your password.').max(200)
+});
+
+export const { handle, signIn, signOut } = SvelteKitAuth(
+	async (): Promise<SvelteKitAuthConfig> => ({
+		secret: authSecret(),
+		// @auth/sveltekit 1.11 ignores AUTH_TRUST_HOST in production; SvelteKit's origin check and
+		// adapter-node's ORIGIN decide which host we answer for.
+		trustHost: true,
+		useSecureCookies: config().origin.startsWith('https:'),
+		// A wrong password is an expected event, counted by the sign-in limit, not an error.
+		logger: {
+			error(e) {
+				if (e.name !== 'CredentialsSignin') console.error('[auth]', e);
+			}
+		},
+		session: { strategy: 'jwt', maxAge: 14 * 24 * 60 * 60 },
+		pages: { signIn: '/signin', error: '/signin' },
+		providers: [
+			Credentials({
+				credentials: { email: {}, password: {} },
+				async authorize(raw) {
+					const parsed = credentialsSchema.safeParse(raw);
+					if (!parsed.success) return null;
+					const user = findUserByEmail(parsed.data.email);
+					if (!user?.passwordHash) {
+						await verifyPassword(await decoyHash(), parsed.data.password);
+						return null;
+					}
+					if (!(await verifyPassword(user.passwordHash, parsed.data.password))) return null;
+					return { id: String(user.id), email: user.email, name: user.name };
+				}
+			})
+		],
+		callbacks: {
+			jwt({ token, user }) {
+				if (user?.id) token.uid = Number(user.id);
+				return token;
+			},
+			session({ session, token }) {
+				return { ...session, uid: typeof token.uid === 'number' ? token.uid : null };
+			}
+		}
+	})
+);

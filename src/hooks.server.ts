@@ -1,0 +1,59 @@
+import { building } from '$app/environment';
+import { json, type Handle, type ServerInit } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
+import { handle as authHandle } from './auth';
+import { db } from '$lib/server/db';
+import { isApi } from '$lib/server/guard';
+import { startCatcher } from '$lib/server/mail/catcher';
+import { mailIsCaptured } from '$lib/server/mail/send';
+import { sessionUser } from '$lib/server/users';
+
+export const init: ServerInit = async () => {
+	if (building) return;
+	db();
+	if (mailIsCaptured()) await startCatcher();
+};
+
+/**
+ * Sign-in goes only through our /signin action, which rate-limits; a direct POST to Auth.js's
+ * credentials callback would skip that, so it is refused.
+ */
+const onlyOurSignIn: Handle = ({ event, resolve }) => {
+	const p = event.url.pathname;
+	if (event.request.method === 'POST' && /^\/auth\/(callback|signin)\//.test(p)) {
+		return new Response('Sign in at /signin.', { status: 404 });
+	}
+	return resolve(event);
+};
+
+const session: Handle = async ({ event, resolve }) => {
+	event.locals.user = null;
+	const s = (await event.locals.auth()) as { uid?: number | null } | null;
+	if (typeof s?.uid === 'number') event.locals.user = sessionUser(s.uid);
+	return resolve(event);
+};
+
+/** A first, coarse gate; each route still checks its own right through the guard helper. */
+const apiNeedsSession: Handle = ({ event, resolve }) => {
+	if (isApi(event) && !event.locals.user && !event.url.pathname.startsWith('/api/public/')) {
+		return json({ error: 'Sign in first.' }, { status: 401 });
+	}
+	return resolve(event);
+};
+
+const securityHeaders: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	response.headers.set('X-Content-Type-Options', 'nosniff');
+	response.headers.set('Referrer-Policy', 'strict-origin-when-cross-origin');
+	response.headers.set('X-Frame-Options', 'DENY');
+	response.headers.set('Permissions-Policy', 'camera=(), microphone=(), geolocation=()');
+	return response;
+};
+
+export const handle = sequence(
+	securityHeaders,
+	onlyOurSignIn,
+	authHandle,
+	session,
+	apiNeedsSession
+);

@@ -1,0 +1,362 @@
+// Floorset's tables: the whole domain of DESIGN.md. Later work adds columns, not rewrites.
+// Times are integer milliseconds since the epoch (Drizzle's timestamp_ms mode gives Dates).
+import { sql } from 'drizzle-orm';
+import {
+	check,
+	index,
+	integer,
+	primaryKey,
+	real,
+	sqliteTable,
+	text,
+	uniqueIndex
+} from 'drizzle-orm/sqlite-core';
+
+const createdAt = () =>
+	integer('created_at', { mode: 'timestamp_ms' })
+		.notNull()
+		.default(sql`(unixepoch('subsec') * 1000)`);
+const updatedAt = () =>
+	integer('updated_at', { mode: 'timestamp_ms' })
+		.notNull()
+		.default(sql`(unixepoch('subsec') * 1000)`);
+
+export const users = sqliteTable(
+	'users',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		email: text('email').notNull(),
+		name: text('name').notNull(),
+		/** Null until the person accepts an invitation and sets a password. */
+		passwordHash: text('password_hash'),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(t) => [
+		uniqueIndex('users_email_unique').on(sql`lower(${t.email})`),
+		check('users_email_shape', sql`${t.email} LIKE '%_@_%'`)
+	]
+);
+
+export const userRoles = sqliteTable(
+	'user_roles',
+	{
+		userId: integer('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		role: text('role', {
+			enum: ['admin', 'organiser', 'dj', 'instructor', 'dancer']
+		}).notNull()
+	},
+	(t) => [
+		primaryKey({ columns: [t.userId, t.role] }),
+		check('user_roles_role', sql`${t.role} IN ('admin','organiser','dj','instructor','dancer')`)
+	]
+);
+
+export const invitations = sqliteTable(
+	'invitations',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		email: text('email').notNull(),
+		name: text('name').notNull(),
+		/** JSON array of roles the invitee will hold. */
+		roles: text('roles', { mode: 'json' }).$type<string[]>().notNull(),
+		/** SHA-256 of the one-time token; the token itself is only ever in the e-mail. */
+		tokenHash: text('token_hash').notNull().unique(),
+		invitedBy: integer('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('invitations_email').on(t.email)]
+);
+
+/** Failed sign-ins, for rate limiting per account and per address. */
+export const signInFailures = sqliteTable(
+	'sign_in_failures',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		/** 'email:<address>' or 'ip:<address>'. */
+		key: text('key').notNull(),
+		at: integer('at').notNull()
+	},
+	(t) => [index('sign_in_failures_key_at').on(t.key, t.at)]
+);
+
+/** Mail captured by the built-in SMTP catcher in development, demo and tests. */
+export const outbox = sqliteTable('outbox', {
+	id: integer('id').primaryKey({ autoIncrement: true }),
+	from: text('from').notNull(),
+	to: text('to').notNull(),
+	subject: text('subject').notNull(),
+	text: text('text').notNull(),
+	html: text('html'),
+	attachments: text('attachments', { mode: 'json' })
+		.$type<{ filename: string; contentType: string; size: number }[]>()
+		.notNull()
+		.default([]),
+	raw: text('raw').notNull(),
+	createdAt: createdAt()
+});
+
+export const tracks = sqliteTable(
+	'tracks',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		title: text('title').notNull(),
+		artist: text('artist').notNull().default(''),
+		album: text('album').notNull().default(''),
+		durationS: real('duration_s').notNull(),
+		/** The tempo we trust (after half/double resolution or the DJ's correction). */
+		bpm: real('bpm'),
+		/** What the detector said before resolution. */
+		rawBpm: real('raw_bpm'),
+		bpmSource: text('bpm_source', { enum: ['detected', 'tapped', 'entered', 'tag'] })
+			.notNull()
+			.default('detected'),
+		offsetS: real('offset_s').notNull().default(0),
+		confidence: real('confidence'),
+		/** Other tempo readings the DJ may flip to (JSON [{bpm, score}]). */
+		candidates: text('candidates', { mode: 'json' })
+			.$type<{ bpm: number; score: number }[]>()
+			.notNull()
+			.default([]),
+		meter: integer('meter').notNull().default(4),
+		phraseBeats: integer('phrase_beats').notNull().default(32),
+		introBeats: integer('intro_beats').notNull().default(0),
+		tagBpm: real('tag_bpm'),
+		format: text('format').notNull().default(''),
+		mimeType: text('mime_type').notNull(),
+		fileSize: integer('file_size').notNull(),
+		sha256: text('sha256').notNull().unique(),
+		/** Key of the audio in storage; never built from user input. */
+		storageKey: text('storage_key').notNull(),
+		originalName: text('original_name').notNull().default(''),
+		uploadedBy: integer('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt(),
+		updatedAt: updatedAt(),
+		version: integer('version').notNull().default(1)
+	},
+	(t) => [
+		check('tracks_meter', sql`${t.meter} IN (3, 4)`),
+		check('tracks_bpm', sql`${t.bpm} IS NULL OR (${t.bpm} > 0 AND ${t.bpm} < 400)`),
+		check('tracks_duration', sql`${t.durationS} >= 0`),
+		check('tracks_phrase', sql`${t.phraseBeats} > 0`),
+		check('tracks_intro', sql`${t.introBeats} >= 0`),
+		check('tracks_size', sql`${t.fileSize} >= 0`),
+		check('tracks_source', sql`${t.bpmSource} IN ('detected','tapped','entered','tag')`),
+		index('tracks_bpm_idx').on(t.bpm),
+		index('tracks_title_idx').on(t.title),
+		index('tracks_created_idx').on(t.createdAt)
+	]
+);
+
+export const dances = sqliteTable(
+	'dances',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		name: text('name').notNull(),
+		counts: integer('counts').notNull(),
+		walls: integer('walls').notNull(),
+		level: text('level', {
+			enum: ['absolute-beginner', 'beginner', 'improver', 'intermediate', 'advanced']
+		}).notNull(),
+		rhythm: text('rhythm').notNull().default('other'),
+		meter: integer('meter').notNull().default(4),
+		bpmMin: real('bpm_min').notNull(),
+		bpmMax: real('bpm_max').notNull(),
+		turn: text('turn', { enum: ['left', 'right'] }),
+		/** Tags and restarts: JSON PhraseEvent[] (see src/lib/domain.ts). */
+		events: text('events', { mode: 'json' })
+			.$type<
+				{
+					kind: 'tag' | 'restart';
+					repetition: number;
+					afterCount: number;
+					lengthCounts: number;
+				}[]
+			>()
+			.notNull()
+			.default([]),
+		notes: text('notes').notNull().default(''),
+		choreographer: text('choreographer').notNull().default(''),
+		/** A dance most of the floor knows: a good last dance. */
+		wellKnown: integer('well_known', { mode: 'boolean' }).notNull().default(false),
+		stepSheetKey: text('step_sheet_key'),
+		stepSheetName: text('step_sheet_name'),
+		createdBy: integer('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt(),
+		updatedAt: updatedAt(),
+		version: integer('version').notNull().default(1)
+	},
+	(t) => [
+		check('dances_counts', sql`${t.counts} > 0`),
+		check('dances_walls', sql`${t.walls} IN (1, 2, 4)`),
+		check('dances_meter', sql`${t.meter} IN (3, 4)`),
+		check('dances_tempo', sql`${t.bpmMin} > 0 AND ${t.bpmMin} < ${t.bpmMax}`),
+		check(
+			'dances_level',
+			sql`${t.level} IN ('absolute-beginner','beginner','improver','intermediate','advanced')`
+		),
+		check('dances_turn', sql`${t.turn} IS NULL OR ${t.turn} IN ('left','right')`),
+		index('dances_name_idx').on(t.name)
+	]
+);
+
+export const fits = sqliteTable(
+	'fits',
+	{
+		trackId: integer('track_id')
+			.notNull()
+			.references(() => tracks.id, { onDelete: 'cascade' }),
+		danceId: integer('dance_id')
+			.notNull()
+			.references(() => dances.id, { onDelete: 'cascade' }),
+		verdict: text('verdict', { enum: ['fits', 'fits-at-rate', 'does-not-fit'] }).notNull(),
+		/** Playback rate the team chose (1 = as recorded). */
+		rate: real('rate').notNull().default(1),
+		/** Rate that suits a lesson of this dance to this track, if the team set one. */
+		lessonRate: real('lesson_rate'),
+		notes: text('notes').notNull().default(''),
+		decidedBy: integer('decided_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedAt: updatedAt()
+	},
+	(t) => [
+		primaryKey({ columns: [t.trackId, t.danceId] }),
+		check('fits_verdict', sql`${t.verdict} IN ('fits','fits-at-rate','does-not-fit')`),
+		check('fits_rate', sql`${t.rate} > 0.25 AND ${t.rate} < 4`),
+		index('fits_dance_idx').on(t.danceId)
+	]
+);
+
+export const evenings = sqliteTable(
+	'evenings',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		title: text('title').notNull(),
+		venue: text('venue').notNull().default(''),
+		startsAt: integer('starts_at', { mode: 'timestamp_ms' }).notNull(),
+		endsAt: integer('ends_at', { mode: 'timestamp_ms' }).notNull(),
+		crowd: text('crowd', { enum: ['mostly-beginners', 'mixed', 'experienced'] })
+			.notNull()
+			.default('mixed'),
+		notes: text('notes').notNull().default(''),
+		status: text('status', { enum: ['draft', 'published'] })
+			.notNull()
+			.default('draft'),
+		/** Random token of the public page; null when not published. */
+		shareToken: text('share_token').unique(),
+		/** Planner settings and must-play / never-play lists (JSON). */
+		planSettings: text('plan_settings', { mode: 'json' })
+			.$type<Record<string, unknown>>()
+			.notNull()
+			.default({}),
+		/** Bumped by every run-order save, so a stale save is refused (409). */
+		runOrderVersion: integer('run_order_version').notNull().default(1),
+		createdBy: integer('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt(),
+		updatedAt: updatedAt(),
+		version: integer('version').notNull().default(1)
+	},
+	(t) => [
+		check('evenings_times', sql`${t.endsAt} > ${t.startsAt}`),
+		check('evenings_status', sql`${t.status} IN ('draft','published')`),
+		check('evenings_crowd', sql`${t.crowd} IN ('mostly-beginners','mixed','experienced')`),
+		index('evenings_starts_idx').on(t.startsAt)
+	]
+);
+
+export const sections = sqliteTable(
+	'sections',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		eveningId: integer('evening_id')
+			.notNull()
+			.references(() => evenings.id, { onDelete: 'cascade' }),
+		position: integer('position').notNull(),
+		kind: text('kind', {
+			enum: ['lesson', 'open-floor', 'request-block', 'break', 'last-dance']
+		}).notNull(),
+		title: text('title').notNull().default(''),
+		startsAt: integer('starts_at', { mode: 'timestamp_ms' }).notNull(),
+		endsAt: integer('ends_at', { mode: 'timestamp_ms' }).notNull(),
+		/** The dance taught in a lesson. */
+		danceId: integer('dance_id').references(() => dances.id, { onDelete: 'set null' }),
+		/** Who teaches it. */
+		teacherId: integer('teacher_id').references(() => users.id, { onDelete: 'set null' })
+	},
+	(t) => [
+		check('sections_times', sql`${t.endsAt} > ${t.startsAt}`),
+		check(
+			'sections_kind',
+			sql`${t.kind} IN ('lesson','open-floor','request-block','break','last-dance')`
+		),
+		uniqueIndex('sections_evening_position').on(t.eveningId, t.position)
+	]
+);
+
+export const runOrderEntries = sqliteTable(
+	'run_order_entries',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		eveningId: integer('evening_id')
+			.notNull()
+			.references(() => evenings.id, { onDelete: 'cascade' }),
+		position: integer('position').notNull(),
+		kind: text('kind', {
+			enum: ['dance', 'teach', 'walkthrough', 'break', 'announcement']
+		}).notNull(),
+		sectionId: integer('section_id').references(() => sections.id, { onDelete: 'set null' }),
+		danceId: integer('dance_id').references(() => dances.id, { onDelete: 'set null' }),
+		trackId: integer('track_id').references(() => tracks.id, { onDelete: 'set null' }),
+		rate: real('rate').notNull().default(1),
+		/** Seconds from the evening's start. */
+		startS: real('start_s').notNull().default(0),
+		durationS: real('duration_s').notNull().default(0),
+		locked: integer('locked', { mode: 'boolean' }).notNull().default(false),
+		/** Announcement text, or a title for a teach or break. */
+		text: text('text').notNull().default(''),
+		reasons: text('reasons', { mode: 'json' }).$type<string[]>().notNull().default([])
+	},
+	(t) => [
+		check('entries_kind', sql`${t.kind} IN ('dance','teach','walkthrough','break','announcement')`),
+		check('entries_rate', sql`${t.rate} > 0.25 AND ${t.rate} < 4`),
+		check('entries_duration', sql`${t.durationS} >= 0`),
+		uniqueIndex('entries_evening_position').on(t.eveningId, t.position)
+	]
+);
+
+export const requests = sqliteTable(
+	'requests',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		/** Null for a standing request (an instructor asking the DJ for slower music). */
+		eveningId: integer('evening_id').references(() => evenings.id, { onDelete: 'cascade' }),
+		kind: text('kind', { enum: ['dance', 'slower-music'] })
+			.notNull()
+			.default('dance'),
+		danceId: integer('dance_id').references(() => dances.id, { onDelete: 'set null' }),
+		/** What a dancer typed when the dance is not in the catalogue. */
+		danceName: text('dance_name').notNull().default(''),
+		message: text('message').notNull().default(''),
+		requesterId: integer('requester_id').references(() => users.id, { onDelete: 'set null' }),
+		requesterName: text('requester_name').notNull().default(''),
+		status: text('status', { enum: ['open', 'planned', 'played', 'declined', 'done'] })
+			.notNull()
+			.default('open'),
+		createdAt: createdAt()
+	},
+	(t) => [
+		check('requests_kind', sql`${t.kind} IN ('dance','slower-music')`),
+		check('requests_status', sql`${t.status} IN ('open','planned','played','declined','done')`),
+		index('requests_evening_idx').on(t.eveningId)
+	]
+);
+
+/** Team-wide settings (rate bound, lesson slow-downs, planner weights) as JSON values. */
+export const settings = sqliteTable('settings', {
+	key: text('key').primaryKey(),
+	value: text('value', { mode: 'json' }).notNull(),
+	updatedAt: updatedAt()
+});

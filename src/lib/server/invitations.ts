@@ -1,0 +1,101 @@
+// One-time invitation links: the token is only in the e-mail; we keep its SHA-256.
+import { createHash, randomBytes } from 'node:crypto';
+import { and, eq, gt, isNull } from 'drizzle-orm';
+import type { Role } from '../domain';
+import { config } from './config';
+import { db } from './db';
+import { invitations, users } from './db/schema';
+import { sendMail } from './mail/send';
+import { hashPassword } from './passwords';
+import { createUser, findUserByEmail, normaliseEmail } from './users';
+
+export const INVITATION_DAYS = 7;
+
+const sha256 = (token: string) => createHash('sha256').update(token).digest('hex');
+
+export class InvitationError extends Error {}
+
+export async function invite(input: {
+	email: string;
+	name: string;
+	roles: Role[];
+	invitedBy: number;
+	now?: number;
+}) {
+	const email = normaliseEmail(input.email);
+	const existing = findUserByEmail(email);
+	if (existing?.passwordHash) throw new InvitationError('That person already has an account.');
+	const token = randomBytes(32).toString('base64url');
+	const now = input.now ?? Date.now();
+	db()
+		.insert(invitations)
+		.values({
+			email,
+			name: input.name,
+			roles: input.roles,
+			tokenHash: sha256(token),
+			invitedBy: input.invitedBy,
+			expiresAt: new Date(now + INVITATION_DAYS * 86_400_000)
+		})
+		.run();
+	const link = `${config().origin}/invite/${token}`;
+	await sendMail({
+		to: email,
+		subject: 'You are invited to Floorset',
+		text: [
+			`Hello ${input.name},`,
+			'',
+			`You have been invited to your dance team's Floorset as: ${input.roles.join(', ')}.`,
+			`Set your password here (the link works once, for ${INVITATION_DAYS} days):`,
+			link,
+			'',
+			'If you were not expecting this, you can ignore this message.'
+		].join('\n')
+	});
+	return { link };
+}
+
+/** The open invitation behind a token, or null when it is unknown, used or expired. */
+export function findOpenInvitation(token: string, now = Date.now()) {
+	if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return null;
+	return (
+		db()
+			.select()
+			.from(invitations)
+			.where(
+				and(
+					eq(invitations.tokenHash, sha256(token)),
+					isNull(invitations.acceptedAt),
+					gt(invitations.expiresAt, new Date(now))
+				)
+			)
+			.get() ?? null
+	);
+}
+
+export async function acceptInvitation(token: string, password: string, now = Date.now()) {
+	const inv = findOpenInvitation(token, now);
+	if (!inv) throw new InvitationError('This invitation link is no longer valid.');
+	const passwordHash = await hashPassword(password);
+	return db().transaction((tx) => {
+		// Claim the invitation first, so the same link cannot be used twice concurrently.
+		const claimed = tx
+			.update(invitations)
+			.set({ acceptedAt: new Date(now) })
+			.where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt)))
+			.run();
+		if (claimed.changes !== 1) throw new InvitationError('This invitation link was already used.');
+		const existing = findUserByEmail(inv.email);
+		if (existing) {
+			if (existing.passwordHash) throw new InvitationError('That person already has an account.');
+			tx.update(users).set({ passwordHash }).where(eq(users.id, existing.id)).run();
+			return existing.id;
+		}
+		return createUser({
+			email: inv.email,
+			name: inv.name,
+			passwordHash,
+			roles: inv.roles as Role[]
+		}).id;
+	});
+}

@@ -1,0 +1,47 @@
+// Reads and validates a JSON request body; bad input becomes a clear 4xx and nothing changes.
+import { json } from '@sveltejs/kit';
+import type { z } from 'zod';
+
+export const MAX_JSON_BYTES = 1024 * 1024;
+
+type Result<T> = { ok: true; data: T } | { ok: false; response: Response };
+
+export const badRequest = (message: string, status = 400, extra: object = {}) =>
+	json({ error: message, ...extra }, { status });
+
+/** The first problem of a zod error in words a person understands, with where it is. */
+export function describeIssue(error: z.ZodError): string {
+	const issue = error.issues[0];
+	if (!issue) return 'The request is not valid.';
+	const where = issue.path.length ? `${issue.path.join('.')}: ` : '';
+	return `${where}${issue.message}`;
+}
+
+export async function readJson<S extends z.ZodType>(
+	request: Request,
+	schema: S
+): Promise<Result<z.infer<S>>> {
+	const type = request.headers.get('content-type') ?? '';
+	if (!type.includes('application/json')) {
+		return { ok: false, response: badRequest('Send the body as application/json.', 415) };
+	}
+	const length = Number(request.headers.get('content-length') ?? 0);
+	if (length > MAX_JSON_BYTES) {
+		return { ok: false, response: badRequest('The request body is too large.', 413) };
+	}
+	const text = await request.text();
+	if (text.length > MAX_JSON_BYTES) {
+		return { ok: false, response: badRequest('The request body is too large.', 413) };
+	}
+	let value: unknown;
+	try {
+		value = JSON.parse(text);
+	} catch {
+		return { ok: false, response: badRequest('The body is not valid JSON.') };
+	}
+	const parsed = schema.safeParse(value);
+	if (!parsed.success) {
+		return { ok: false, response: badRequest(describeIssue(parsed.error), 422) };
+	}
+	return { ok: true, data: parsed.data };
+}

@@ -1,0 +1,49 @@
+import { fail } from '@sveltejs/kit';
+import { requireRight } from '$lib/server/guard';
+import { invite, InvitationError } from '$lib/server/invitations';
+import { listPeople, setRoles } from '$lib/server/users';
+import { inviteSchema, rolesSchema } from '$lib/schemas/people';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = ((event) => {
+	requireRight(event, 'people');
+	return { people: listPeople() };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	invite: async (event) => {
+		const me = requireRight(event, 'people');
+		const form = await event.request.formData();
+		const values = {
+			email: String(form.get('email') ?? ''),
+			name: String(form.get('name') ?? ''),
+			roles: form.getAll('roles').map(String)
+		};
+		const parsed = inviteSchema.safeParse(values);
+		if (!parsed.success) {
+			return fail(400, { invite: { values, message: parsed.error.issues[0]?.message } });
+		}
+		try {
+			await invite({ ...parsed.data, invitedBy: me.id });
+		} catch (e) {
+			if (e instanceof InvitationError)
+				return fail(400, { invite: { values, message: e.message } });
+			throw e;
+		}
+		return { invited: parsed.data.email };
+	},
+	roles: async (event) => {
+		const me = requireRight(event, 'people');
+		const form = await event.request.formData();
+		const parsed = rolesSchema.safeParse({
+			userId: form.get('userId'),
+			roles: form.getAll('roles').map(String)
+		});
+		if (!parsed.success) return fail(400, { rolesMessage: parsed.error.issues[0]?.message });
+		if (parsed.data.userId === me.id && !parsed.data.roles.includes('admin')) {
+			return fail(400, { rolesMessage: 'You cannot remove your own admin role.' });
+		}
+		setRoles(parsed.data.userId, parsed.data.roles);
+		return { saved: parsed.data.userId };
+	}
+} satisfies Actions;

@@ -1,0 +1,49 @@
+import { CredentialsSignin } from '@auth/core/errors';
+import { fail, isRedirect, redirect } from '@sveltejs/kit';
+import { credentialsSchema, signIn } from '../../auth';
+import { publicRoute } from '$lib/server/guard';
+import { clearAccount, isLimited, recordFailure } from '$lib/server/sign-in-limit';
+import type { Actions, PageServerLoad } from './$types';
+
+const WRONG = 'That e-mail and password do not match an account.';
+
+/** Only same-site paths, so the sign-in page cannot be used to send people elsewhere. */
+const safeTarget = (to: string | null) => (to && /^\/(?!\/)/.test(to) ? to : '/');
+
+export const load = ((event) => {
+	publicRoute(event);
+	if (event.locals.user) redirect(303, safeTarget(event.url.searchParams.get('redirectTo')));
+	return { redirectTo: safeTarget(event.url.searchParams.get('redirectTo')) };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	default: async (event) => {
+		publicRoute(event);
+		const form = await event.request.clone().formData();
+		const email = String(form.get('email') ?? '');
+		const parsed = credentialsSchema.safeParse({ email, password: form.get('password') });
+		if (!parsed.success) {
+			return fail(400, { email, message: parsed.error.issues[0]?.message ?? WRONG });
+		}
+		const address = event.getClientAddress();
+		if (isLimited(parsed.data.email, address)) {
+			return fail(429, {
+				email,
+				message: 'Too many failed sign-ins. Wait fifteen minutes, then try again.'
+			});
+		}
+		try {
+			await signIn(event);
+		} catch (e) {
+			// Auth.js answers with a redirect on success; a failure is a CredentialsSignin error
+			// (or, in some versions, a redirect to ?error=).
+			if (isRedirect(e) && !e.location.includes('error=')) {
+				clearAccount(parsed.data.email);
+				redirect(303, safeTarget(String(form.get('redirectTo') ?? '/')));
+			}
+			if (!isRedirect(e) && !(e instanceof CredentialsSignin)) throw e;
+		}
+		recordFailure(parsed.data.email, address);
+		return fail(400, { email, message: WRONG });
+	}
+} satisfies Actions;
