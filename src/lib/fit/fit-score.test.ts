@@ -42,7 +42,12 @@ describe('fitTrackToDance', () => {
 	});
 	it('words a rate change as issue 4 does: "danced at 0.96× — 125 → 120 BPM"', () => {
 		const item = fitTrackToDance(track({ bpm: 125 }), dance({ bpmMin: 112, bpmMax: 120 }));
-		expect(item.tempo).toEqual({ trackBpm: 125, effectiveBpm: 120, rate: 0.96, relation: 'direct' });
+		expect(item.tempo).toEqual({
+			trackBpm: 125,
+			effectiveBpm: 120,
+			rate: 0.96,
+			relation: 'direct'
+		});
 		expect(item.reasons).toContain('danced at 0.96× — 125 → 120 BPM');
 	});
 	it('scores a rate change lower the further it is from 1', () => {

@@ -3,9 +3,15 @@
 import type { DanceFacts, TrackFacts, Verdict } from '../domain';
 import { fitMeter } from './meter-fit';
 import { phrasingFor, type Phrasing, type PhrasingDetail } from './phrasing';
-import { bpmText, driftReason, durationText, plural, rateText, tempoReason, wallWords } from './reasons';
+import { fitReasons, ReasonMemo } from './fit-reasons';
 import { resolveFitSettings, type FitSettings } from './settings';
-import { fitTempo, RELATION_FACTOR, tempoAtRate, type TempoFit, type TempoRelation } from './tempo-fit';
+import {
+	fitTempo,
+	RELATION_FACTOR,
+	tempoAtRate,
+	type TempoFit,
+	type TempoRelation
+} from './tempo-fit';
 
 /** The team's word on a pairing; `rate` is the playback rate chosen with 'fits-at-rate'. */
 export interface TeamVerdict {
@@ -64,89 +70,74 @@ const rounded = (x: number) => Math.round(x * 1000) / 1000;
  * Score one track for one dance. `verdict` (the team's) outranks the computed figures: with
  * 'fits' the track is taken as it is (rate 1, or the verdict's rate), with 'fits-at-rate' at the
  * verdict's rate (or the best rate when none is given), with 'does-not-fit' the score is 0.
- * Pass `withReasons = false` to skip the words (the ranking does, for tracks it will not show).
+ * `withReasons`: false skips the words (the ranking does, for tracks it will not show); a
+ * ReasonMemo shares sentences across calls for the same dance and settings.
  */
 export function fitTrackToDance(
 	track: TrackFacts,
 	dance: DanceFacts,
 	verdict?: TeamVerdict | null,
-	settings?: Partial<FitSettings> | FitSettings,
-	withReasons = true
+	settings?: Partial<FitSettings> | FitSettings | null,
+	withReasons: boolean | ReasonMemo = true
 ): FitItem {
 	const s = isResolved(settings) ? settings : resolveFitSettings(settings);
-	const reasons: string[] = [];
-	const words = withReasons ? reasons : null;
 	const v = verdict?.verdict ?? null;
 	const vRate = verdict?.rate != null && verdict.rate > 0 ? verdict.rate : null;
 	const range =
 		dance.bpmMin <= dance.bpmMax ? dance : { bpmMin: dance.bpmMax, bpmMax: dance.bpmMin };
-
-	if (words && v === 'fits') words.push(`the team marked it as fitting`);
-	if (words && v === 'fits-at-rate') {
-		words.push(`the team marked it as fitting${vRate ? ` at ${rateText(vRate)}` : ' at a changed rate'}`);
-	}
-	if (words && v === 'does-not-fit') words.push('the team marked it as not fitting');
-
 	const meter = fitMeter(track.meter, dance.meter);
-	if (words && meter.reason) words.push(meter.reason);
 
 	const bpm = track.bpm != null && track.bpm > 0 ? track.bpm : null;
+	const fixedRate = v === 'fits' ? (vRate ?? 1) : v === 'fits-at-rate' ? vRate : null;
 	let tempo: TempoFit | null = null;
 	if (bpm != null) {
-		const fixedRate = v === 'fits' ? (vRate ?? 1) : v === 'fits-at-rate' ? vRate : null;
 		tempo =
 			fixedRate != null
 				? tempoAtRate(bpm, range, fixedRate, s.allowHalfDouble)
 				: fitTempo(bpm, range, s);
-		if (words) {
-			words.push(tempoReason(tempo, range.bpmMin, range.bpmMax, s.maxRateChange));
-			// Halving 3/4 puts 1½ counts in a bar: it only works when the measured tempo was itself
-			// a double (or half) reading. A 3/4 track truly at 180 is Viennese waltz speed.
-			if (tempo.relation !== 'direct' && dance.meter === 3) {
-				words.push(
-					`in 3/4 this only works if ${bpmText(bpm)} BPM was measured at ${tempo.relation === 'half' ? 'double' : 'half'} the real beat — check the track's tempo`
-				);
-			}
-		}
-	} else if (words) {
-		words.push('tempo not measured yet');
 	}
 	const rate = tempo ? tempo.rate : (vRate ?? 1);
-	const factor = tempo ? RELATION_FACTOR[tempo.relation] : 1;
+	const p = phrasingFor(
+		dance,
+		track,
+		tempo ? RELATION_FACTOR[tempo.relation] : 1,
+		rate,
+		s.cleanEndCounts
+	);
 
-	const p = phrasingFor(dance, track, factor, rate, s.cleanEndCounts);
-	if (words) {
-		words.push(driftReason(dance.counts, p.driftCounts, p.realignAfterRepetitions, p.phraseCounts, p.hasEvents));
-	}
-	const align = alignmentScore(p, dance.counts);
 	const clean = p.endsCleanly === true;
 	const front = clean && p.endWall === 1;
-	const phrasing = 0.8 * align + 0.12 * (clean ? 1 : 0) + 0.08 * (front ? 1 : 0);
-
+	const phrasing =
+		0.8 * alignmentScore(p, dance.counts) + 0.12 * (clean ? 1 : 0) + 0.08 * (front ? 1 : 0);
+	const playedS = track.durationS / rate;
 	let length = 0.5;
-	if (p.repetitions != null && p.secondsPerRepetition != null) {
-		const played = track.durationS / rate;
-		length = 1;
+	if (p.repetitions != null) {
 		if (p.repetitions < s.minRepetitions) length = 0.2;
-		else if (played > s.longSongS) length = Math.max(0.4, 1 - (played - s.longSongS) / s.longSongS);
-		if (words) {
-			words.push(
-				`${plural(p.repetitions, 'whole repetition')}, ${Math.round(p.secondsPerRepetition * 10) / 10} s each`
-			);
-			if (dance.walls > 1 && p.endWall != null) words.push(`ends on ${wallWords(p.endWall, dance.walls, dance.turn)}`);
-			words.push(
-				clean
-					? 'the music ends with a repetition'
-					: `the music stops ${Math.round(p.intoRepetition ?? 0)} counts into a repetition`
-			);
-			if (p.repetitions < s.minRepetitions) words.push(`too short for ${s.minRepetitions} repetitions`);
-			else if (played > s.longSongS) words.push(`a long song as played (${durationText(played)})`);
-		}
+		else if (playedS > s.longSongS)
+			length = Math.max(0.4, 1 - (playedS - s.longSongS) / s.longSongS);
+		else length = 1;
 	}
-
 	const tempoPart = tempo ? tempoScore(tempo, s, dance.meter === 3) : UNMEASURED_TEMPO;
 	const computed = tempoPart * (0.55 + 0.3 * phrasing + 0.15 * length);
 	const score = !meter.ok || v === 'does-not-fit' ? 0 : rounded(computed);
+
+	const reasons = withReasons
+		? fitReasons(
+				{
+					verdict: v,
+					verdictRate: vRate,
+					meterReason: meter.reason,
+					tempo,
+					fixedRate: fixedRate != null,
+					range,
+					phrasing: p,
+					playedS
+				},
+				dance,
+				s,
+				withReasons === true ? null : withReasons
+			)
+		: [];
 
 	return {
 		trackId: track.id,

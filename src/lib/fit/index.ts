@@ -5,6 +5,7 @@ export * from './phrasing';
 export * from './tempo-fit';
 export * from './meter-fit';
 export * from './reasons';
+export * from './fit-reasons';
 export * from './fit-score';
 export * from './rank';
 export * from './lesson-tempo';

@@ -145,7 +145,10 @@ describe('tags and restarts shift the figures', () => {
 describe('phrasingFor a track', () => {
 	it('counts from the first beat and past the intro', () => {
 		// 120 BPM: 0.5 s offset, 16-beat intro (8 s), then 64 s = 128 counts = 4 repetitions.
-		const p = phrasingFor(dance(), track({ bpm: 120, offsetS: 0.5, introBeats: 16, durationS: 72.5 }));
+		const p = phrasingFor(
+			dance(),
+			track({ bpm: 120, offsetS: 0.5, introBeats: 16, durationS: 72.5 })
+		);
 		expect(p).toMatchObject({
 			driftCounts: 0,
 			realignAfterRepetitions: 1,
@@ -157,7 +160,9 @@ describe('phrasingFor a track', () => {
 	});
 	it('slowing the song stretches its counts: the repetitions stay the same', () => {
 		const t = track({ bpm: 120, durationS: 200 });
-		expect(phrasingFor(dance(), t, 1, 0.9).repetitions).toBe(phrasingFor(dance(), t, 1, 1).repetitions);
+		expect(phrasingFor(dance(), t, 1, 0.9).repetitions).toBe(
+			phrasingFor(dance(), t, 1, 1).repetitions
+		);
 	});
 	it('counted at half time, a 240 BPM song has half the counts and 16-count phrases', () => {
 		const p = phrasingFor(dance({ counts: 32 }), track({ bpm: 240, durationS: 128 }), 0.5);

@@ -6,7 +6,11 @@ import { secondsForCounts } from './figures';
 export function gcd(a: number, b: number): number {
 	a = Math.abs(a);
 	b = Math.abs(b);
-	while (b) [a, b] = [b, a % b];
+	while (b) {
+		const r = a % b;
+		a = b;
+		b = r;
+	}
 	return a;
 }
 
@@ -44,13 +48,23 @@ export interface Sequence {
 	lengths: number[];
 }
 
-const sequences = new WeakMap<readonly PhraseEvent[], Sequence>();
+// One sequence per dance object: the ranking asks for it once per track. Dances are read, not
+// changed, by the engine; a changed events list, count or wall number builds a new one.
+const sequences = new WeakMap<object, { events: readonly PhraseEvent[]; seq: Sequence }>();
 
 export function sequenceOf(dance: Pick<DanceFacts, 'counts' | 'walls' | 'events'>): Sequence {
-	const cached = dance.events && sequences.get(dance.events);
-	if (cached && cached.counts === dance.counts && cached.walls === dance.walls) return cached;
-	const seq = buildSequence(dance.counts, dance.walls, dance.events ?? []);
-	if (dance.events) sequences.set(dance.events, seq);
+	const cached = sequences.get(dance);
+	if (
+		cached &&
+		cached.events === dance.events &&
+		cached.seq.counts === dance.counts &&
+		cached.seq.walls === dance.walls
+	) {
+		return cached.seq;
+	}
+	const events = dance.events ?? [];
+	const seq = buildSequence(dance.counts, dance.walls, events);
+	sequences.set(dance, { events, seq });
 	return seq;
 }
 
@@ -74,7 +88,10 @@ export function buildSequence(
 	const lengths: number[] = [];
 	for (let r = 1; r <= last; r++) {
 		const here = valid.filter((e) => e.repetition === r);
-		const cut = here.reduce((c, e) => (e.kind === 'restart' ? Math.min(c, e.afterCount) : c), counts);
+		const cut = here.reduce(
+			(c, e) => (e.kind === 'restart' ? Math.min(c, e.afterCount) : c),
+			counts
+		);
 		let length = cut;
 		for (const e of here) if (e.kind === 'tag' && e.afterCount <= cut) length += e.lengthCounts;
 		lengths.push(length);
@@ -225,30 +242,34 @@ export function phrasingFor(
 ): PhrasingDetail {
 	const seq = sequenceOf(dance);
 	const p = phraseCounts(track.phraseBeats, factor);
-	const base = {
-		driftCounts: driftCounts(seq.counts, p),
-		realignAfterRepetitions: realignWithEvents(seq, p),
-		phraseCounts: p,
-		hasEvents: seq.lengths.length > 0
-	};
+	const drift = driftCounts(seq.counts, p);
+	const realign = realignWithEvents(seq, p);
+	const hasEvents = seq.lengths.length > 0;
 	const bpm = track.bpm;
+	// One object literal per call, no spreads: the ranking calls this 10,000 times.
 	if (bpm == null || !(bpm > 0) || !(rate > 0)) {
 		return {
-			...base,
+			driftCounts: drift,
+			realignAfterRepetitions: realign,
 			secondsPerRepetition: null,
 			repetitions: null,
 			endWall: null,
 			endsCleanly: null,
+			phraseCounts: p,
+			hasEvents,
 			intoRepetition: null
 		};
 	}
 	const end = songEnd(seq, availableCounts(track, bpm, factor), cleanEndCounts);
 	return {
-		...base,
+		driftCounts: drift,
+		realignAfterRepetitions: realign,
 		secondsPerRepetition: secondsPerRepetition(seq.counts, bpm * factor * rate),
 		repetitions: end.repetitions,
 		endWall: end.endWall,
 		endsCleanly: end.endsCleanly,
+		phraseCounts: p,
+		hasEvents,
 		intoRepetition: end.intoRepetition
 	};
 }

@@ -64,8 +64,8 @@ describe('rankDancesForTrack', () => {
 			[2, { verdict: 'fits' }],
 			[1, { verdict: 'does-not-fit' }]
 		]);
-		expect(rankDancesForTrack(perfect, [waltz, quick, stomp], verdicts).map((i) => i.danceId)).toEqual([
-			2, 3, 1
-		]);
+		expect(
+			rankDancesForTrack(perfect, [waltz, quick, stomp], verdicts).map((i) => i.danceId)
+		).toEqual([2, 3, 1]);
 	});
 });

@@ -1,16 +1,19 @@
 // Ranking fits, best first: the team's "fits" verdicts (as is or at a rate) above every computed
 // guess, then the computed score, and "does not fit" last; ties by id so the order is stable.
 import type { DanceFacts, TrackFacts } from '../domain';
+import { ReasonMemo } from './fit-reasons';
 import { fitTrackToDance, prepareSettings, type FitItem, type TeamVerdict } from './fit-score';
 import type { FitSettings } from './settings';
 
 /** Verdicts by track id (or dance id); a Map or a plain object both work. */
 export type VerdictLookup =
-	| ReadonlyMap<number, TeamVerdict>
-	| Readonly<Record<number, TeamVerdict | undefined>>;
+	ReadonlyMap<number, TeamVerdict> | Readonly<Record<number, TeamVerdict | undefined>>;
 
 /** The verdict for an id in either kind of lookup. */
-export function verdictFor(verdicts: VerdictLookup | null | undefined, id: number): TeamVerdict | null {
+export function verdictFor(
+	verdicts: VerdictLookup | null | undefined,
+	id: number
+): TeamVerdict | null {
 	if (!verdicts) return null;
 	if (verdicts instanceof Map) return verdicts.get(id) ?? null;
 	return (verdicts as Record<number, TeamVerdict | undefined>)[id] ?? null;
@@ -43,6 +46,43 @@ function normalLimit(limit: number | null | undefined, n: number): number {
  * The tracks that suit a dance, best first. Only the first `limit` items carry reasons and are
  * built in full; the rest are scored without words.
  */
+/**
+ * Score every candidate, order them, and build the first `limit` in full. When every item will be
+ * shown, each is built once with its reasons; otherwise the rest are scored without words.
+ */
+function rankCandidates<T extends { id: number }>(
+	candidates: readonly T[],
+	verdicts: VerdictLookup | null | undefined,
+	limit: number | null | undefined,
+	evaluate: (candidate: T, verdict: TeamVerdict | null, words: boolean | ReasonMemo) => FitItem,
+	memo: ReasonMemo | null = null
+): FitItem[] {
+	const n = candidates.length;
+	const keep = normalLimit(limit, n);
+	const full = keep === n;
+	const keys = new Float64Array(n);
+	const ids = new Float64Array(n);
+	const built: FitItem[] = full ? new Array<FitItem>(n) : [];
+	for (let i = 0; i < n; i++) {
+		const c = candidates[i];
+		const v = verdictFor(verdicts, c.id);
+		const item = evaluate(c, v, full && (memo ?? true));
+		if (full) built[i] = item;
+		keys[i] = group(v) * 2 - item.score;
+		ids[i] = c.id;
+	}
+	const top = order(keys, ids, keep);
+	const items = new Array<FitItem>(top.length);
+	for (let k = 0; k < top.length; k++) {
+		const i = top[k];
+		items[k] = full
+			? built[i]
+			: evaluate(candidates[i], verdictFor(verdicts, candidates[i].id), memo ?? true);
+	}
+	return items;
+}
+
+/** The tracks that suit a dance, best first (see the file comment for the order). */
 export function rankFits(
 	dance: DanceFacts,
 	tracks: readonly TrackFacts[],
@@ -51,22 +91,14 @@ export function rankFits(
 	limit?: number | null
 ): FitItem[] {
 	const s = prepareSettings(settings);
-	const n = tracks.length;
-	const keys = new Float64Array(n);
-	const ids = new Float64Array(n);
-	for (let i = 0; i < n; i++) {
-		const t = tracks[i];
-		const v = verdictFor(verdictsByTrackId, t.id);
-		keys[i] = group(v) * 2 - fitTrackToDance(t, dance, v, s, false).score;
-		ids[i] = t.id;
-	}
-	const top = order(keys, ids, normalLimit(limit, n));
-	const items = new Array<FitItem>(top.length);
-	for (let k = 0; k < top.length; k++) {
-		const t = tracks[top[k]];
-		items[k] = fitTrackToDance(t, dance, verdictFor(verdictsByTrackId, t.id), s, true);
-	}
-	return items;
+	// One dance and one settings object throughout, so sentences can be shared.
+	return rankCandidates(
+		tracks,
+		verdictsByTrackId,
+		limit,
+		(t, v, words) => fitTrackToDance(t, dance, v, s, words),
+		new ReasonMemo()
+	);
 }
 
 /** The dances a track suits, best first; the same rules from the track's side. */
@@ -78,20 +110,7 @@ export function rankDancesForTrack(
 	limit?: number | null
 ): FitItem[] {
 	const s = prepareSettings(settings);
-	const n = dances.length;
-	const keys = new Float64Array(n);
-	const ids = new Float64Array(n);
-	for (let i = 0; i < n; i++) {
-		const d = dances[i];
-		const v = verdictFor(verdictsByDanceId, d.id);
-		keys[i] = group(v) * 2 - fitTrackToDance(track, d, v, s, false).score;
-		ids[i] = d.id;
-	}
-	const top = order(keys, ids, normalLimit(limit, n));
-	const items = new Array<FitItem>(top.length);
-	for (let k = 0; k < top.length; k++) {
-		const d = dances[top[k]];
-		items[k] = fitTrackToDance(track, d, verdictFor(verdictsByDanceId, d.id), s, true);
-	}
-	return items;
+	return rankCandidates(dances, verdictsByDanceId, limit, (d, v, words) =>
+		fitTrackToDance(track, d, v, s, words)
+	);
 }

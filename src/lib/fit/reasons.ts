@@ -27,7 +27,11 @@ export function rangeText(bpmMin: number, bpmMax: number): string {
 	return bpmMin === bpmMax ? `${bpmText(bpmMin)} BPM` : `${bpmText(bpmMin)}–${bpmText(bpmMax)} BPM`;
 }
 
-const RELATION_WORDS = { direct: '', half: 'counted at half time', double: 'counted at double time' };
+const RELATION_WORDS = {
+	direct: '',
+	half: 'counted at half time',
+	double: 'counted at double time'
+};
 
 /** "danced at 0.96× — 125 → 120 BPM", "counted at half time — 180 → 90 BPM", … */
 export function tempoReason(

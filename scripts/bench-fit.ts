@@ -1,0 +1,129 @@
+// Benchmark: rank the fits of several dances over 10,000 invented tracks (issue 4 target: under
+// 50 ms per ranking). Deterministic: the same invented library every run.
+import { cpus, loadavg } from 'node:os';
+import type { DanceFacts, Meter, TrackFacts } from '../src/lib/domain';
+import { rankFits, type TeamVerdict } from '../src/lib/fit/index';
+
+const TRACKS = 10_000;
+const RUNS = 40;
+const WARM_UP = 5;
+
+/** mulberry32: a small seeded generator, so the invented library is the same every run. */
+function random(seed: number): () => number {
+	return () => {
+		seed = (seed + 0x6d2b79f5) | 0;
+		let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
+		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+	};
+}
+
+const rand = random(20261201);
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
+
+const tracks: TrackFacts[] = Array.from({ length: TRACKS }, (_, i) => {
+	const meter: Meter = rand() < 0.15 ? 3 : 4;
+	return {
+		id: i + 1,
+		title: `Invented Song ${i + 1}`,
+		artist: `Invented Band ${(i % 97) + 1}`,
+		durationS: 120 + rand() * 240,
+		bpm: rand() < 0.05 ? null : Math.round((60 + rand() * 150) * 10) / 10,
+		offsetS: rand() * 1.5,
+		meter,
+		phraseBeats: meter === 3 ? pick([24, 48]) : pick([32, 32, 32, 16, 64]),
+		introBeats: pick([0, 0, 4, 8, 16, 32])
+	};
+});
+
+const verdicts = new Map<number, TeamVerdict>();
+for (const t of tracks) {
+	const r = rand();
+	if (r < 0.02) verdicts.set(t.id, { verdict: 'fits' });
+	else if (r < 0.03) verdicts.set(t.id, { verdict: 'fits-at-rate', rate: 0.95 });
+	else if (r < 0.05) verdicts.set(t.id, { verdict: 'does-not-fit' });
+}
+
+const base = { level: 'beginner', turn: 'left', events: [] as DanceFacts['events'] } as const;
+const dances: DanceFacts[] = [
+	{
+		...base,
+		id: 1,
+		name: 'Copper Kettle Stomp',
+		counts: 32,
+		walls: 4,
+		rhythm: 'two-step',
+		meter: 4,
+		bpmMin: 116,
+		bpmMax: 124
+	},
+	{
+		...base,
+		id: 2,
+		name: 'Harvest Moon Glide',
+		counts: 48,
+		walls: 2,
+		rhythm: 'waltz',
+		meter: 3,
+		bpmMin: 84,
+		bpmMax: 96
+	},
+	{
+		...base,
+		id: 3,
+		name: 'Dusty Boots Cha',
+		counts: 40,
+		walls: 4,
+		rhythm: 'cha-cha',
+		meter: 4,
+		bpmMin: 100,
+		bpmMax: 112
+	},
+	{
+		...base,
+		id: 4,
+		name: 'Lantern Swing',
+		counts: 32,
+		walls: 4,
+		rhythm: 'east-coast-swing',
+		meter: 4,
+		bpmMin: 142,
+		bpmMax: 158,
+		events: [
+			{ kind: 'tag', repetition: 3, afterCount: 32, lengthCounts: 4 },
+			{ kind: 'restart', repetition: 6, afterCount: 16, lengthCounts: 0 }
+		]
+	}
+];
+
+function stats(ms: number[]): { median: number; p95: number } {
+	const s = [...ms].sort((a, b) => a - b);
+	return {
+		median: s[Math.floor(s.length / 2)],
+		p95: s[Math.min(s.length - 1, Math.ceil(s.length * 0.95) - 1)]
+	};
+}
+
+console.log(
+	`bench:fit — ${TRACKS} invented tracks, ${RUNS} runs per case after ${WARM_UP} warm-up`
+);
+let worst = 0;
+for (const limit of [50, null]) {
+	for (const d of dances) {
+		const times: number[] = [];
+		let first = 0;
+		for (let run = 0; run < WARM_UP + RUNS; run++) {
+			const t0 = performance.now();
+			const items = rankFits(d, tracks, verdicts, null, limit);
+			const ms = performance.now() - t0;
+			if (run >= WARM_UP) times.push(ms);
+			first = items[0]?.trackId ?? 0;
+		}
+		const { median, p95 } = stats(times);
+		worst = Math.max(worst, p95);
+		console.log(
+			`${d.name.padEnd(22)} limit ${String(limit ?? 'all').padEnd(4)} median ${median.toFixed(2)} ms  p95 ${p95.toFixed(2)} ms  (best track ${first})`
+		);
+	}
+}
+console.log(`worst p95 ${worst.toFixed(2)} ms — target < 50 ms: ${worst < 50 ? 'met' : 'NOT met'}`);
