@@ -8,7 +8,9 @@ const config = {
 		runes: true
 	},
 	kit: {
-		adapter: adapter({ out: 'build' }),
+		// Separate output folders (FLOORSET_KIT_DIR, FLOORSET_BUILD_DIR) let parallel builds coexist.
+		outDir: process.env.FLOORSET_KIT_DIR ?? '.svelte-kit',
+		adapter: adapter({ out: process.env.FLOORSET_BUILD_DIR ?? 'build' }),
 		csp: {
 			mode: 'auto',
 			directives: {

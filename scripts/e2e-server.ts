@@ -1,0 +1,28 @@
+// The server the end-to-end tests talk to: the built app on a fresh database seeded with the
+// demo (the seed's audio cache is shared with `npm start`, so only the first run encodes).
+import { spawn } from 'node:child_process';
+import { rmSync } from 'node:fs';
+import { applyEnvDefaults } from './env';
+
+process.env.PORT = process.env.E2E_PORT ?? '4173';
+const dir = `test-results/e2e-data-${process.env.PORT}`;
+rmSync(dir, { recursive: true, force: true });
+process.env.HOST = '127.0.0.1';
+process.env.DATABASE_URL = `${dir}/floorset.db`;
+process.env.UPLOAD_DIR = `${dir}/uploads`;
+process.env.AUTH_SECRET = 'e2e-only-secret-not-for-production-0123456789';
+process.env.MAX_UPLOAD_MB ??= '5';
+delete process.env.SMTP_HOST;
+applyEnvDefaults();
+
+const { seed } = await import('./seed');
+await seed();
+const { db } = await import('../src/lib/server/db');
+db().$client.close();
+
+const server = spawn(process.execPath, [`${process.env.FLOORSET_BUILD_DIR ?? 'build'}/index.js`], {
+	stdio: 'inherit',
+	env: process.env
+});
+for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal));
+server.on('exit', (code) => process.exit(code ?? 0));

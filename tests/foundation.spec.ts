@@ -1,0 +1,107 @@
+import { expect, test } from '@playwright/test';
+import { signIn, type DemoRole } from './helpers';
+
+// What each demo role should see in the main navigation (DESIGN.md, "People and roles").
+const NAV: Record<DemoRole, string[]> = {
+	admin: ['Music', 'Dances', 'Evenings', 'Requests', 'People', 'Outbox'],
+	organiser: ['Music', 'Dances', 'Evenings', 'Requests'],
+	dj: ['Music', 'Dances', 'Evenings', 'Requests'],
+	instructor: ['Music', 'Dances', 'Evenings', 'Requests'],
+	dancer: ['Dances', 'Evenings']
+};
+
+for (const [role, labels] of Object.entries(NAV) as [DemoRole, string[]][]) {
+	test(`${role} signs in and sees their navigation`, async ({ page }) => {
+		await signIn(page, role);
+		const nav = page.getByRole('navigation', { name: 'Main' });
+		await expect(nav.getByRole('link')).toHaveText(labels);
+	});
+}
+
+test('a dancer opening an organiser page gets the 403 page', async ({ page }) => {
+	await signIn(page, 'dancer');
+	const response = await page.goto('/admin/people');
+	expect(response?.status()).toBe(403);
+	await expect(page.getByTestId('error-page')).toContainText('Not for your roles');
+});
+
+test('signed out, a page redirects to sign-in and the API answers 401 JSON', async ({
+	page,
+	request
+}) => {
+	await page.goto('/admin/outbox');
+	await expect(page).toHaveURL(/\/signin\?redirectTo=%2Fadmin%2Foutbox/);
+	const res = await request.get('/api/me');
+	expect(res.status()).toBe(401);
+	expect(await res.json()).toEqual({ error: 'Sign in first.' });
+});
+
+test('a wrong password gets one message that does not tell whether the account exists', async ({
+	page
+}) => {
+	for (const email of ['organiser@floorset.test', 'nobody-here@floorset.test']) {
+		await page.goto('/signin');
+		await page.getByLabel('E-mail').fill(email);
+		await page.getByLabel('Password').fill('not the password');
+		await page.getByRole('button', { name: 'Sign in' }).click();
+		await expect(page.getByRole('alert')).toHaveText(
+			'That e-mail and password do not match an account.'
+		);
+	}
+});
+
+test('an admin invites someone, who sets a password from the e-mailed link and signs in', async ({
+	page,
+	browser
+}) => {
+	const email = `newcomer-${Date.now()}@floorset.test`;
+	await signIn(page, 'admin');
+	await page.goto('/admin/people');
+	await page.getByLabel('Name').fill('Ada Newcombe');
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByRole('checkbox', { name: 'dj' }).first().check();
+	await page.getByRole('button', { name: 'Send invitation' }).click();
+	await expect(page.getByRole('status')).toContainText(`Invitation sent to ${email}`);
+
+	await page.goto('/admin/outbox');
+	const message = page.getByTestId('outbox-message').filter({ hasText: email }).first();
+	await message.locator('summary').click();
+	const body = await message.locator('pre').innerText();
+	const link = body.match(/https?:\/\/\S+\/invite\/\S+/)?.[0];
+	expect(link, 'the invitation e-mail carries a link').toBeTruthy();
+
+	const guest = await browser.newPage();
+	await guest.goto(link!);
+	await guest.getByLabel('New password').fill('a-long-new-password');
+	await guest.getByLabel('The same again').fill('a-long-new-password');
+	await guest.getByRole('button', { name: 'Set password' }).click();
+	await expect(guest).toHaveURL(/\/signin/);
+	await guest.getByLabel('E-mail').fill(email);
+	await guest.getByLabel('Password').fill('a-long-new-password');
+	await guest.getByRole('button', { name: 'Sign in' }).click();
+	await expect(guest.getByTestId('who')).toContainText('dj');
+
+	// The link works once.
+	const again = await guest.goto(link!);
+	expect(again?.status()).toBe(404);
+
+	await guest.getByRole('button', { name: 'Sign out' }).click();
+	await expect(guest.getByRole('link', { name: 'Sign in' })).toBeVisible();
+	await guest.close();
+});
+
+test('the safe floors page is open to everyone and cites the WHO standard', async ({ page }) => {
+	await page.goto('/');
+	await page.getByRole('link', { name: 'Safe floors' }).click();
+	await expect(page.getByRole('heading', { name: 'Safe floors' })).toBeVisible();
+	// WHO, Global standard for safe listening venues and events (2022): 100 dB LAeq over 15 min.
+	await expect(page.getByText('100 dB LAeq over any 15 minutes')).toBeVisible();
+});
+
+test('health check answers with the database state', async ({ request }) => {
+	const res = await request.get('/healthz');
+	expect(res.status()).toBe(200);
+	const body = await res.json();
+	expect(body).toMatchObject({ ok: true, db: 'ok' });
+	expect(body.version).toMatch(/^\d+\.\d+\.\d+/);
+});
