@@ -120,6 +120,37 @@ describe('fitTrackToDance', () => {
 	});
 });
 
+describe('tags and restarts in the score', () => {
+	it('a tag that puts the dance off the phrase for good costs phrasing points, in words', () => {
+		const tagged = dance({
+			events: [{ kind: 'tag', repetition: 3, afterCount: 32, lengthCounts: 4 }]
+		});
+		const item = fitTrackToDance(clean, tagged);
+		expect(item.phrasing.realignAfterRepetitions).toBeNull();
+		expect(item.reasons).toContain(
+			'its tags and restarts leave it out of line with 32-count phrases'
+		);
+		expect(item.score).toBeLessThan(fitTrackToDance(clean, dance()).score);
+	});
+	it('a restart counts as a new repetition, so the end wall moves', () => {
+		// 240 counts (120 s at 120 BPM). Plain: 7 repetitions and 16 counts, dancing on wall 4.
+		// With a restart after 16 in repetition 2: 32 + 16 + 6 × 32 = 240, 8 whole repetitions,
+		// and the 9th would begin on the starting wall.
+		const song = track({ bpm: 120, durationS: 120 });
+		expect(fitTrackToDance(song, dance()).phrasing).toMatchObject({
+			repetitions: 7,
+			endWall: 4,
+			endsCleanly: false
+		});
+		const restarted = dance({
+			events: [{ kind: 'restart', repetition: 2, afterCount: 16, lengthCounts: 0 }]
+		});
+		const item = fitTrackToDance(song, restarted);
+		expect(item.phrasing).toMatchObject({ repetitions: 8, endWall: 1, endsCleanly: true });
+		expect(item.reasons).toContain('ends on the starting wall');
+	});
+});
+
 describe('the team’s verdict outranks the computed score', () => {
 	it('does-not-fit scores 0 whatever the figures', () => {
 		const item = fitTrackToDance(clean, dance(), { verdict: 'does-not-fit' });

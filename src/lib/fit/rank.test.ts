@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { TeamVerdict } from './fit-score';
+import { fitTrackToDance } from './fit-score';
 import { rankDancesForTrack, rankFits } from './rank';
 import { dance, track } from './test-helpers';
 
@@ -46,6 +47,29 @@ describe('rankFits', () => {
 		const wide = rankFits(d, [track({ id: 1, bpm: 140 })], null, { maxRateChange: 0.15 })[0];
 		expect(wide.score).toBeGreaterThan(narrow.score);
 		expect(wide.tempo.rate).toBeLessThan(1);
+	});
+});
+
+describe('shared sentences', () => {
+	it('a ranking words every item exactly as a single fit would', () => {
+		const tracks = [];
+		for (let i = 0; i < 300; i++) {
+			const bpm = i % 17 === 0 ? null : 90 + ((i * 7) % 80) + (i % 3) * 0.5;
+			tracks.push(
+				track({ id: i, bpm, durationS: 60 + ((i * 13) % 300), meter: i % 11 === 0 ? 3 : 4 })
+			);
+		}
+		const verdicts = new Map<number, TeamVerdict>([
+			[5, { verdict: 'fits-at-rate', rate: 0.97 }],
+			[6, { verdict: 'fits' }],
+			[7, { verdict: 'does-not-fit' }]
+		]);
+		const ranked = rankFits(d, tracks, verdicts);
+		expect(ranked).toHaveLength(300);
+		for (const item of ranked) {
+			const t = tracks[item.trackId];
+			expect(item).toEqual(fitTrackToDance(t, d, verdicts.get(t.id) ?? null));
+		}
 	});
 });
 
