@@ -167,6 +167,15 @@ describe('the team’s verdict outranks the computed score', () => {
 		expect(item.tempo.effectiveBpm).toBeCloseTo(123.5, 6);
 		expect(item.reasons[0]).toBe('the team marked it as fitting at 0.95×');
 	});
+	it('a verdict rate that misses the range a little still scores as out of range', () => {
+		// 130 at 0.97× is 126.1, just above 116–124: out of range, so at most the misfit ceiling.
+		const item = fitTrackToDance(track({ bpm: 130 }), dance(), {
+			verdict: 'fits-at-rate',
+			rate: 0.97
+		});
+		expect(item.score).toBeLessThanOrEqual(0.15);
+		expect(item.reasons[1]).toBe('danced at 0.97× — 130 → 126.1 BPM, above 116–124 BPM');
+	});
 	it('fits-at-rate without a rate falls back to the best rate', () => {
 		const item = fitTrackToDance(track({ bpm: 130 }), dance(), { verdict: 'fits-at-rate' });
 		expect(item.tempo.rate).toBeCloseTo(124 / 130, 2);

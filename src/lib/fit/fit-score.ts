@@ -51,7 +51,7 @@ function tempoScore(t: TempoFit, s: FitSettings, triple: boolean): number {
 		return (1 - 0.3 * used) * relation;
 	}
 	const over = (t.distance - bound) / (2 * Math.max(bound, 0.01));
-	return OUT_OF_RANGE_TEMPO * Math.max(0, 1 - over) * relation;
+	return OUT_OF_RANGE_TEMPO * Math.min(1, Math.max(0, 1 - over)) * relation;
 }
 
 /** 1 = starts every repetition on a phrase; lower the longer it takes to line up again. */
