@@ -107,7 +107,7 @@ function stats(ms: number[]): { median: number; p95: number } {
 console.log(
 	`bench:fit — ${TRACKS} invented tracks, ${RUNS} runs per case after ${WARM_UP} warm-up`
 );
-let worst = 0;
+const worst = new Map<string, number>();
 for (const limit of [50, null]) {
 	for (const d of dances) {
 		const times: number[] = [];
@@ -120,10 +120,17 @@ for (const limit of [50, null]) {
 			first = items[0]?.trackId ?? 0;
 		}
 		const { median, p95 } = stats(times);
-		worst = Math.max(worst, p95);
+		const key = limit == null ? 'all' : `limit ${limit}`;
+		worst.set(key, Math.max(worst.get(key) ?? 0, p95));
 		console.log(
 			`${d.name.padEnd(22)} limit ${String(limit ?? 'all').padEnd(4)} median ${median.toFixed(2)} ms  p95 ${p95.toFixed(2)} ms  (best track ${first})`
 		);
 	}
 }
-console.log(`worst p95 ${worst.toFixed(2)} ms — target < 50 ms: ${worst < 50 ? 'met' : 'NOT met'}`);
+// The fits API ranks with a limit (only the items shown carry reasons); the full list builds
+// 10,000 items with their sentences, and its p95 is the more sensitive to garbage collection.
+for (const [key, ms] of worst) {
+	console.log(
+		`${key}: worst p95 ${ms.toFixed(2)} ms — target < 50 ms ${ms < 50 ? 'met' : 'NOT met'}`
+	);
+}
