@@ -2,10 +2,10 @@
 // its slot, replace a track with another that fits the same dance, or replace a dance with
 // another of similar length. The iteration count is the binding, deterministic limit; the wall
 // clock is only a safety net.
+import { musicEnd, musicWindow, trailingBreak } from './breaks';
 import { danceItem, stretchItem } from './items';
 import type { Cand, Item, Plan, Problem } from './model';
 import { clonePlan } from './model';
-import { slotEnd } from './layout';
 import { evaluate } from './objective';
 import type { Rng } from './rng';
 
@@ -61,8 +61,8 @@ type Undo = () => void;
  * its window, so that replacements keep the timing rule and re-centre it over time. */
 function wantedDur(ctx: Ctx, s: number, dur: number): number {
 	const slot = ctx.plan[s];
-	const mid = (slot.lo + slot.hi) / 2;
-	return dur + (mid - slotEnd(ctx.problem, slot)) * ctx.rng.next();
+	const win = musicWindow(ctx.problem, slot);
+	return dur + ((win.lo + win.hi) / 2 - musicEnd(ctx.problem, slot)) * ctx.rng.next();
 }
 
 function replaceWith(ctx: Ctx, s: number, i: number, c: Cand): Undo {
@@ -99,10 +99,12 @@ function propose(ctx: Ctx): Undo | null {
 	if (r < 0.5) {
 		const s = ctx.danceSlots[rng.int(ctx.danceSlots.length)];
 		const items = plan[s].items;
-		if (items.length < 2) return null;
-		const from = rng.int(items.length);
-		if (items[from].locked || items[from].stretch) return null;
-		const to = rng.int(items.length);
+		// The planned break stays last in its slot.
+		const n = items.length - (trailingBreak(plan[s]) ? 1 : 0);
+		if (n < 2) return null;
+		const from = rng.int(n);
+		if (items[from].stretch) return null;
+		const to = rng.int(n);
 		if (to === from) return null;
 		const saved = items.slice();
 		const [it] = items.splice(from, 1);
@@ -132,8 +134,9 @@ function propose(ctx: Ctx): Undo | null {
 	}
 	// Add or remove the announcement that closes a gap the music cannot.
 	const s = ctx.danceSlots[rng.int(ctx.danceSlots.length)];
+	if (trailingBreak(plan[s])) return null;
 	const items = plan[s].items;
-	const at = items.findIndex((it) => it.stretch && !it.locked);
+	const at = items.findIndex((it) => it.kind === 'announcement' && it.stretch);
 	if (at >= 0) {
 		const [it] = items.splice(at, 1);
 		return () => items.splice(at, 0, it);

@@ -1,9 +1,10 @@
 // Greedy construction: walk the night slot by slot and, at each step, add the entry with the
 // lowest cost given what came before, keeping every hard rule it can see.
-import { danceItem, fixedItem, stretchItem } from './items';
+import { musicWindow, planBreaks, trailingBreak } from './breaks';
+import { danceItem, stretchItem } from './items';
 import { sizeStretch } from './layout';
 import { fillFixedSlots } from './lesson';
-import type { Cand, Plan, Problem, Slot } from './model';
+import type { Cand, Item, Plan, Problem, Slot } from './model';
 import {
 	HARD,
 	advanceDance,
@@ -115,6 +116,27 @@ function globalGain(
 	return cost;
 }
 
+/** Whether what is left, [lo, hi] seconds, can still be filled: room for two entries or more,
+ * or some single playable duration that lands in it (sorted `durs`, by binary search). */
+function closable(
+	durs: Float64Array,
+	lo: number,
+	hi: number,
+	minDur: number,
+	gap: number
+): boolean {
+	if (hi < minDur) return false;
+	if (hi >= 2 * minDur + gap) return true;
+	let a = 0;
+	let b = durs.length;
+	while (a < b) {
+		const m = (a + b) >> 1;
+		if (durs[m] < lo) a = m + 1;
+		else b = m;
+	}
+	return a < durs.length && durs[a] <= hi;
+}
+
 interface Pick {
 	cand: Cand;
 	cost: number;
@@ -127,7 +149,8 @@ export function bestPick(
 	st: State,
 	slot: Slot,
 	start: number,
-	minRoom: number
+	minRoom: number,
+	durs: Float64Array
 ): Pick | null {
 	const s = problem.settings;
 	const limit = s.breakEveryMin * 60 - st.w.dancing;
@@ -150,7 +173,8 @@ export function bestPick(
 				const end = start + c.dur;
 				if (end > slot.hi) continue;
 				if (end < slot.lo) {
-					if (slot.hi - end - s.gapS < minRoom) continue;
+					if (!closable(durs, slot.lo - end - s.gapS, slot.hi - end - s.gapS, minRoom, s.gapS))
+						continue;
 				} else timing = Math.abs(end - mid) / half;
 				found = c;
 				break;
@@ -171,58 +195,53 @@ function fillDanceSlot(
 	problem: Problem,
 	st: State,
 	slot: Slot,
-	minDur: number,
+	durs: Float64Array,
 	lastEnd: number
 ): number {
+	const minDur = durs.length ? durs[0] : Infinity;
 	const s = problem.settings;
-	const breakLen = s.breakLengthMin * 60;
-	const limit = s.breakEveryMin * 60;
+	const win = musicWindow(problem, slot);
+	const tail = trailingBreak(slot);
+	const music: Item[] = [];
+	const view: Slot = { ...slot, lo: win.lo, hi: win.hi, items: music };
 	let end = slot.start;
-	if (slot.start - lastEnd >= breakLen) restWalk(st.w);
+	if (slot.start - lastEnd >= s.breakLengthMin * 60) restWalk(st.w);
 	for (let guard = 0; guard < 500; guard++) {
-		if (slot.items.length > 0 && end >= slot.lo) break;
-		const start = slot.items.length ? end + s.gapS : slot.start;
-		if (st.w.dancing + minDur > limit && start + breakLen <= slot.hi) {
-			slot.items.push(fixedItem('break', breakLen, true));
-			restWalk(st.w);
-			end = start + breakLen;
-			continue;
-		}
-		const pick = bestPick(problem, st, slot, start, minDur);
-		if (!pick && st.w.dancing > limit / 2 && start + breakLen <= slot.hi) {
-			// Nothing short enough is left before the limit: rest now rather than later.
-			slot.items.push(fixedItem('break', breakLen, true));
-			restWalk(st.w);
-			end = start + breakLen;
-			continue;
-		}
+		if (music.length > 0 && end >= win.lo) break;
+		const start = music.length ? end + s.gapS : slot.start;
+		const pick = bestPick(problem, st, view, start, minDur, durs);
 		if (!pick) {
-			if (end < slot.lo && slot.lo - start <= s.announcementMaxS) {
-				slot.items.push(stretchItem('announcement', MIN_ANNOUNCEMENT_S, s.announcementMaxS));
-				sizeStretch(problem, slot);
-				end = start + slot.items[slot.items.length - 1].dur;
+			if (!tail && end < win.lo && win.lo - start <= s.announcementMaxS) {
+				music.push(stretchItem('announcement', MIN_ANNOUNCEMENT_S, s.announcementMaxS));
+				sizeStretch(problem, view);
+				end = start + music[music.length - 1].dur;
 			}
 			break;
 		}
-		slot.items.push(danceItem(pick.cand));
+		music.push(danceItem(pick.cand));
 		st.w.dancing += pick.cand.dur;
 		record(problem, st, pick.cand, start);
 		end = start + pick.cand.dur;
 	}
-	return slot.items.length ? end : lastEnd;
+	slot.items = tail ? [...music, tail] : music;
+	if (tail) {
+		restWalk(st.w);
+		return slot.target;
+	}
+	return music.length ? end : lastEnd;
 }
 
-/** The shortest playable duration, below which no further entry could fit. */
-function shortest(problem: Problem): number {
-	let min = Infinity;
-	for (const d of problem.playable)
-		for (const c of problem.dances[d].cands) min = Math.min(min, c.dur);
-	return Number.isFinite(min) ? min : Infinity;
+/** Every playable duration, sorted: what the greedy can still close a slot with. */
+function durations(problem: Problem): Float64Array {
+	const out: number[] = [];
+	for (const d of problem.playable) for (const c of problem.dances[d].cands) out.push(c.dur);
+	return Float64Array.from(out).sort();
 }
 
 export function construct(problem: Problem, locks: LockedEntry[]): Plan {
-	const plan = buildSlots(problem, locks);
-	const used = fillFixedSlots(problem, plan);
+	const slots = buildSlots(problem, locks);
+	const used = fillFixedSlots(problem, slots);
+	const plan = planBreaks(problem, slots);
 	const lockedPlays: State['lockedPlays'] = [];
 	for (const s of plan) {
 		for (const it of s.items) {
@@ -240,11 +259,11 @@ export function construct(problem: Problem, locks: LockedEntry[]): Plan {
 		lockedPlays,
 		firstDance: firstDanceStart(problem, plan)
 	};
-	const minDur = shortest(problem);
+	const durs = durations(problem);
 	let lastEnd = 0;
 	for (const slot of plan) {
 		if (slot.kind === 'fixed') lastEnd = walkFixed(problem, st, slot, lastEnd);
-		else lastEnd = fillDanceSlot(problem, st, slot, minDur, lastEnd);
+		else lastEnd = fillDanceSlot(problem, st, slot, durs, lastEnd);
 	}
 	return plan;
 }

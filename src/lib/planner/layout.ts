@@ -32,6 +32,7 @@ export function place(problem: Problem, plan: Plan): Placed[] {
 		let t = slot.start;
 		slot.items.forEach((item, k) => {
 			if (k > 0) t += gap;
+			if (item.inserted && item.stretch && t < slot.target - item.dur) t = slot.target - item.dur;
 			out.push({ item, slot, start: t });
 			t += item.dur;
 		});
@@ -44,5 +45,6 @@ export function slotEnd(problem: Problem, slot: Slot): number {
 	if (slot.items.length === 0) return slot.start;
 	let t = slot.start + problem.settings.gapS * (slot.items.length - 1);
 	for (const it of slot.items) t += it.dur;
-	return t;
+	const last = slot.items[slot.items.length - 1];
+	return last.inserted && last.stretch ? Math.max(t, slot.target) : t;
 }

@@ -2,7 +2,7 @@
 // sections. These do not change during the search.
 import { danceItem, fixedItem, stretchItem } from './items';
 import type { Plan, Problem, Slot } from './model';
-import { lessonCands } from './prepare';
+import { isLessonTempo, lessonCands } from './prepare';
 
 const room = (s: Slot) => s.target - s.start;
 
@@ -10,13 +10,23 @@ function fillLesson(problem: Problem, slots: Slot[], dance: number, used: Set<nu
 	const { gapS, teachLengthMin, walkthroughLengthMin } = problem.settings;
 	const free = slots.filter((s) => s.items.length === 0);
 	const hasLockedPlay = slots.some((s) =>
-		s.items.some((i) => i.locked && i.kind === 'dance' && i.cand?.dance === dance)
+		s.items.some(
+			(i) =>
+				i.locked && i.kind === 'dance' && i.cand?.dance === dance && isLessonTempo(problem, i.cand)
+		)
 	);
 	const main = hasLockedPlay
 		? null
 		: free.reduce<Slot | null>((a, s) => (a && room(a) >= room(s) ? a : s), null);
 	for (const s of free) if (s !== main && room(s) >= 60) s.items.push(stretchItem('teach', 0));
-	if (!main) return;
+	if (!main) {
+		if (!hasLockedPlay) {
+			problem.inputViolations.push(
+				`Locked entries fill the lesson, leaving no room to play ${problem.dances[dance].name} at lesson tempo.`
+			);
+		}
+		return;
+	}
 	const full = problem.dances[dance].full;
 	// Prefer a lesson track that leaves another full-tempo track for the reprise.
 	const options = lessonCands(problem, dance).filter((c) => !used.has(c.track));
@@ -26,12 +36,20 @@ function fillLesson(problem: Problem, slots: Slot[], dance: number, used: Set<nu
 	);
 	const teach = teachLengthMin * 60;
 	const walk = walkthroughLengthMin * 60;
+	const taught = slots.some((s) => s.items.some((i) => i.locked && i.kind === 'teach'));
+	const teachMins = taught ? [0] : [teach, Math.min(teach, 120)];
 	for (const withWalk of walk > 0 ? [true, false] : [false]) {
-		for (const minTeach of [teach, Math.min(teach, 120)]) {
-			const need = minTeach + (withWalk ? walk + gapS : 0) + gapS;
-			const pick = options.find((c) => need + c.dur <= room(main));
+		for (const minTeach of teachMins) {
+			const walkPart = withWalk ? walk + gapS : 0;
+			const pick = options.find(
+				(c) =>
+					minTeach + gapS + walkPart + c.dur <= room(main) ||
+					(minTeach === 0 && walkPart + c.dur <= room(main))
+			);
 			if (!pick) continue;
-			main.items.push(stretchItem('teach', minTeach));
+			// With the teach locked elsewhere, more teaching is added only to fill spare time.
+			const spare = room(main) - walkPart - pick.dur;
+			if (minTeach > 0 || spare > 60) main.items.push(stretchItem('teach', minTeach));
 			if (withWalk) main.items.push(fixedItem('walkthrough', walk));
 			main.items.push(danceItem(pick, true));
 			used.add(pick.track);

@@ -175,6 +175,12 @@ export function prepare(
 	};
 }
 
+/** Lesson tempo: slowed (rate below 1), or already at or below the bottom of the dance's range. */
+export function isLessonTempo(problem: Problem, c: Cand): boolean {
+	const d = problem.dances[c.dance];
+	return c.rate < 1 || (c.eff > 0 && c.eff <= d.bpmMin);
+}
+
 /** Lesson pairings: tracks the team slowed for teaching, then slow-enough tracks, then the best
  * fitting tracks slowed by the fallback rate. Every one is at lesson tempo (rate < 1, or at or
  * below the bottom of the dance's range). */
@@ -184,15 +190,18 @@ export function lessonCands(problem: Problem, d: number): Cand[] {
 	const marked: Cand[] = [];
 	const slow: Cand[] = [];
 	const slowed: Cand[] = [];
-	const at = (c: Cand, rate: number): Cand => ({
-		...c,
-		rate,
-		dur: problem.tracks[c.track].durationS / rate,
-		eff: c.eff > 0 ? (c.eff / c.rate) * rate : 0
-	});
+	const at = (c: Cand, raw: number): Cand => {
+		const rate = Math.round(raw * 1000) / 1000;
+		return {
+			...c,
+			rate,
+			dur: problem.tracks[c.track].durationS / rate,
+			eff: c.eff > 0 ? (c.eff / c.rate) * rate : 0
+		};
+	};
 	for (const c of dance.cands) {
 		if (c.lessonRate !== null) marked.push(at(c, c.lessonRate));
-		else if (c.rate < 1 || (c.eff > 0 && c.eff <= dance.bpmMin)) slow.push(c);
+		else if (isLessonTempo(problem, c)) slow.push(c);
 		else slowed.push(at(c, c.rate * fallback));
 	}
 	return [...marked, ...slow, ...slowed];

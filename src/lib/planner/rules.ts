@@ -1,7 +1,9 @@
 // The hard rules, checked on a laid-out plan and reported in plain words. The search keeps them
 // through the objective's penalty; this check says which (if any) the input made impossible.
+import { trailingBreak } from './breaks';
 import { place, slotEnd } from './layout';
 import type { Plan, Problem } from './model';
+import { isLessonTempo } from './prepare';
 import { minutesWords } from './time';
 
 const EPS = 1e-6;
@@ -59,15 +61,18 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 		const title = problem.sections[slot.section]?.title ?? problem.sections[slot.section]?.kind;
 		if (end > slot.hi + EPS)
 			out.push(`The ${title} runs ${minutesWords(end - slot.hi)} over its time.`);
-		if (end < slot.lo - EPS)
+		if (end < slot.lo - EPS && !trailingBreak(slot))
 			out.push(`The ${title} ends ${minutesWords(slot.lo - end)} early: not enough music fits.`);
 	}
 	for (const l of problem.lessons) {
-		const inLesson = placed.some((p) => p.item.lesson && p.item.cand?.dance === l.dance);
-		const lockedIn = placed.some(
-			(p) => p.item.locked && p.slot.section === l.section && p.item.cand?.dance === l.dance
+		const inLesson = placed.some(
+			(p) =>
+				p.slot.section === l.section &&
+				p.item.kind === 'dance' &&
+				p.item.cand?.dance === l.dance &&
+				(p.item.lesson || (p.item.locked && isLessonTempo(problem, p.item.cand)))
 		);
-		if (!inLesson && !lockedIn)
+		if (!inLesson)
 			out.push(`The lesson has no practice dance of ${name(l.dance)} at lesson tempo.`);
 		const again = placed.some(
 			(p) =>

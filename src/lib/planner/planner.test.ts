@@ -1,0 +1,227 @@
+import { describe, expect, it } from 'vitest';
+import { checkRunOrder } from './check';
+import { planEvening, plainGreedy } from './index';
+import { inventEvening } from './invented';
+import type { PlanDance, PlanFit, PlanInput, PlanTrack } from './types';
+
+// Invented catalogue and music for hand-made examples.
+const dance = (id: number, over: Partial<PlanDance> = {}): PlanDance => ({
+	id,
+	name: `Velora Step ${id}`,
+	level: 'beginner',
+	rhythm: (['cha-cha', 'polka', 'two-step', 'shuffle', 'rock'] as const)[id % 5],
+	counts: 32,
+	walls: 4,
+	bpmMin: 100,
+	bpmMax: 130,
+	wellKnown: true,
+	...over
+});
+const track = (id: number, durationS: number, bpm = 112): PlanTrack => ({
+	id,
+	title: `Quiet Lantern ${id}`,
+	artist: 'The Tamsels',
+	durationS,
+	bpm
+});
+const fit = (danceId: number, trackId: number, over: Partial<PlanFit> = {}): PlanFit => ({
+	danceId,
+	trackId,
+	score: 0.9,
+	verdict: 'fits',
+	rate: 1,
+	...over
+});
+const at = (hhmm: string) => `2026-12-05T${hhmm}:00Z`;
+const quick = { iterations: 400, timeBudgetMs: 1e9 };
+
+describe('worked examples of the timing (plain arithmetic)', () => {
+	it('lays three tracks of 180, 200 and 175 s into a 10-minute floor with 15 s changeovers', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('20:10'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 600 }]
+			},
+			dances: [dance(1), dance(2), dance(3)],
+			tracks: [track(11, 180), track(12, 200), track(13, 175)],
+			fits: [fit(1, 11), fit(2, 12), fit(3, 13)],
+			settings: { ...quick, endToleranceS: 20 }
+		};
+		const plan = planEvening(input);
+		expect(plan.violations).toEqual([]);
+		const durs = plan.entries.map((e) => e.durationS);
+		expect(durs.slice().sort((a, b) => a - b)).toEqual([175, 180, 200]);
+		// Starts: 0, d1 + 15, d1 + d2 + 30; the floor ends at 180 + 200 + 175 + 30 = 585 s, inside
+		// the window 600 − 20 … 600.
+		expect(plan.entries.map((e) => e.startS)).toEqual([0, durs[0] + 15, durs[0] + durs[1] + 30]);
+		const end = plan.entries[2].startS + plan.entries[2].durationS;
+		expect(end).toBe(585);
+	});
+
+	it('fills a 19:30–20:15 lesson: teach, walkthrough, then the dance at 0.85×', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('19:30'),
+				endsAt: at('20:30'),
+				crowd: 'mostly-beginners',
+				sections: [
+					{ id: 'l', kind: 'lesson', startS: 0, endS: 2700, danceId: 1 },
+					{ id: 'f', kind: 'open-floor', startS: 2700, endS: 3600 }
+				]
+			},
+			dances: [dance(1), dance(2), dance(3), dance(4), dance(5)],
+			tracks: [track(11, 204), track(12, 210), track(13, 200), track(14, 190), track(15, 220)],
+			fits: [fit(1, 11, { lessonRate: 0.85 }), fit(1, 12), fit(2, 13), fit(3, 14), fit(4, 15)],
+			settings: { ...quick, walkthroughLengthMin: 3 }
+		};
+		const plan = planEvening(input);
+		expect(plan.violations).toEqual([]);
+		const [teach, walk, slow] = plan.entries;
+		// 204 s ÷ 0.85 = 240 s; the teach fills the rest: 2700 − 240 − 180 − 2 × 15 = 2250 s.
+		expect(slow).toMatchObject({
+			kind: 'dance',
+			danceId: 1,
+			trackId: 11,
+			rate: 0.85,
+			startS: 2460
+		});
+		expect(slow.durationS).toBeCloseTo(240, 9);
+		expect(walk).toMatchObject({ kind: 'walkthrough', startS: 2265, durationS: 180 });
+		expect(teach).toMatchObject({ kind: 'teach', startS: 0, durationS: 2250 });
+		expect(slow.reasons).toContain('taught in the lesson at 0.85×');
+		// And again later at full tempo, to the other track (no track twice).
+		const again = plan.entries.filter((e) => e.danceId === 1 && e.startS >= 2700);
+		expect(again).toHaveLength(1);
+		expect(again[0]).toMatchObject({ trackId: 12, rate: 1 });
+		expect(again[0].reasons.join(' ')).toMatch(/again at full tempo/);
+	});
+});
+
+describe('the planner on an invented four-hour evening', () => {
+	const input = inventEvening({ seed: 42, dances: 120, tracks: 700, minutes: 240 });
+	const settings = { iterations: 3000, timeBudgetMs: 1e9 };
+	const plan = planEvening({ ...input, settings });
+
+	it('keeps every hard rule, checked independently of the search', () => {
+		expect(plan.violations).toEqual([]);
+		expect(checkRunOrder({ ...input, settings }, plan.entries)).toEqual([]);
+	});
+
+	it('numbers the entries in order and lays them out without overlap', () => {
+		plan.entries.forEach((e, i) => {
+			expect(e.position).toBe(i);
+			if (i > 0) {
+				const prev = plan.entries[i - 1];
+				expect(e.startS).toBeGreaterThanOrEqual(prev.startS + prev.durationS);
+			}
+		});
+	});
+
+	it('inserts breaks into long floors and says why', () => {
+		const breaks = plan.entries.filter((e) => e.kind === 'break');
+		expect(breaks.length).toBeGreaterThanOrEqual(2);
+		const added = breaks.filter((b) =>
+			b.reasons.some((r) => /^break after \d+ minutes of dancing$/.test(r))
+		);
+		expect(added.length).toBeGreaterThanOrEqual(1);
+	});
+
+	it('gives every entry reasons, and every dance its fit score', () => {
+		for (const e of plan.entries) expect(e.reasons.length).toBeGreaterThan(0);
+		for (const e of plan.entries.filter((x) => x.kind === 'dance')) {
+			expect(e.reasons.some((r) => /score \d/.test(r))).toBe(true);
+		}
+	});
+
+	it('honours the must-play and keeps never-play dances and tracks out', () => {
+		const must = input.mustPlay![0];
+		expect(plan.entries.some((e) => e.danceId === must)).toBe(true);
+		for (const e of plan.entries) {
+			expect(input.neverPlay!.danceIds).not.toContain(e.danceId);
+			expect(input.neverPlay!.trackIds).not.toContain(e.trackId);
+		}
+	});
+
+	it('ends with a well-known, easy last dance', () => {
+		const last = plan.entries.filter((e) => e.kind === 'dance').at(-1)!;
+		const d = input.dances.find((x) => x.id === last.danceId)!;
+		expect(d.wellKnown).toBe(true);
+		expect(['absolute-beginner', 'beginner']).toContain(d.level);
+		expect(last.reasons).toContain('last dance: well known and easy');
+	});
+
+	it('is no worse than the plain greedy baseline, and the same for the same seed', () => {
+		const greedy = plainGreedy({ ...input, settings });
+		expect(plan.objective.total).toBeLessThanOrEqual(greedy.objective.total + 1e-9);
+		const again = planEvening({ ...input, settings });
+		expect(again.entries).toEqual(plan.entries);
+		expect(again.objective).toEqual(plan.objective);
+	});
+
+	it('adds up its objective from its terms', () => {
+		const sum = Object.values(plan.objective.terms).reduce((a, b) => a + b, 0);
+		expect(plan.objective.total).toBeCloseTo(sum, 9);
+		expect(plan.objective.terms.hard).toBe(0);
+	});
+
+	it('re-plans around locked entries without moving them', () => {
+		const picks = plan.entries.filter((e) => e.kind === 'dance' && e.startS > 3000).slice(2, 5);
+		const locked = picks.map((e) => ({
+			position: e.position,
+			startS: e.startS,
+			entry: {
+				kind: e.kind,
+				danceId: e.danceId,
+				trackId: e.trackId,
+				durationS: e.durationS,
+				rate: e.rate,
+				sectionId: e.sectionId
+			}
+		}));
+		const again = planEvening({ ...input, settings, locked, seed: 99 });
+		expect(again.violations).toEqual([]);
+		for (const l of locked) {
+			const kept = again.entries.find((e) => e.locked && e.startS === l.startS)!;
+			expect(kept).toMatchObject({
+				danceId: l.entry.danceId,
+				trackId: l.entry.trackId,
+				durationS: l.entry.durationS
+			});
+			expect(kept.reasons).toContain('locked by the team');
+		}
+		expect(checkRunOrder({ ...input, settings, locked }, again.entries)).toEqual([]);
+	});
+});
+
+describe('fit rules', () => {
+	it('never plays a track the team marked "does not fit", however high its score', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('20:10'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 600 }]
+			},
+			dances: [dance(1), dance(2), dance(3)],
+			tracks: [track(11, 180), track(12, 200), track(13, 175), track(14, 190)],
+			fits: [
+				fit(1, 11, { verdict: 'does-not-fit', score: 1 }),
+				fit(1, 14, { verdict: null, score: 0.6 }),
+				fit(2, 12, { verdict: null, score: 0.49 }),
+				fit(2, 13, { verdict: 'fits-at-rate', rate: 0.95, score: 0.4 }),
+				fit(3, 11, { verdict: null, score: 0.8 })
+			],
+			settings: quick
+		};
+		const plan = planEvening(input);
+		const pairs = plan.entries.map((e) => `${e.danceId}:${e.trackId}`);
+		expect(pairs).not.toContain('1:11');
+		expect(pairs).not.toContain('2:12');
+		// A team verdict outranks a low score; its rate lengthens the entry: 175 ÷ 0.95.
+		const slowed = plan.entries.find((e) => e.trackId === 13);
+		if (slowed) expect(slowed.durationS).toBeCloseTo(175 / 0.95, 9);
+		expect(checkRunOrder(input, plan.entries).filter((p) => p.rule === 'fit')).toEqual([]);
+	});
+});
