@@ -11,6 +11,12 @@ const config = {
 		// Separate output folders (FLOORSET_KIT_DIR, FLOORSET_BUILD_DIR) let parallel builds coexist.
 		outDir: process.env.FLOORSET_KIT_DIR ?? '.svelte-kit',
 		adapter: adapter({ out: process.env.FLOORSET_BUILD_DIR ?? 'build' }),
+		typescript: {
+			// The seed and the scripts are type-checked and linted like the app.
+			config: (tsconfig) => {
+				tsconfig.include.push('../seeds/**/*.ts', '../scripts/**/*.ts', '../*.config.ts');
+			}
+		},
 		csp: {
 			mode: 'auto',
 			directives: {

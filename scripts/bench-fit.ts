@@ -1,6 +1,5 @@
 // Benchmark: rank the fits of several dances over 10,000 invented tracks (issue 4 target: under
 // 50 ms per ranking). Deterministic: the same invented library every run.
-import { cpus, loadavg } from 'node:os';
 import type { DanceFacts, Meter, TrackFacts } from '../src/lib/domain';
 import { rankFits, type TeamVerdict } from '../src/lib/fit/index';
 

@@ -6,11 +6,14 @@ import { db } from '$lib/server/db';
 import { isApi } from '$lib/server/guard';
 import { startCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
+import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
 
 export const init: ServerInit = async () => {
 	if (building) return;
 	db();
+	const swept = describeSweep(await sweepOrphans());
+	if (swept) console.log(swept);
 	if (mailIsCaptured()) await startCatcher();
 };
 

@@ -15,6 +15,8 @@ export interface Storage {
 	read(key: string, range?: { start: number; end: number }): ReadableStream<Uint8Array>;
 	remove(key: string): Promise<void>;
 	keys(prefix: string): Promise<string[]>;
+	/** Removes half-written temporary files left by a crash; returns how many. */
+	removeTemporary(): Promise<number>;
 }
 
 const KEY = /^(audio|sheets)\/[a-f0-9]{64}\.[a-z0-9]{2,5}$/;
@@ -69,6 +71,22 @@ export function diskStorage(root: string): Storage {
 			} catch {
 				return [];
 			}
+		},
+		async removeTemporary() {
+			let removed = 0;
+			for (const prefix of ['audio', 'sheets']) {
+				let names: string[] = [];
+				try {
+					names = await readdir(join(base, prefix));
+				} catch {
+					continue;
+				}
+				for (const name of names.filter((n) => n.endsWith('.part'))) {
+					await rm(join(base, prefix, name), { force: true });
+					removed++;
+				}
+			}
+			return removed;
 		}
 	};
 }
