@@ -1,0 +1,83 @@
+// What the fit engine reads from the database, selected narrowly: ranking one dance over ten
+// thousand tracks must stay well under 50 ms, and most of a track row (hashes, candidates,
+// names) plays no part in a fit.
+import { eq } from 'drizzle-orm';
+import type { DanceFacts, TrackFacts } from '../../domain';
+import type { TeamVerdict } from '../../fit';
+import { db } from '../db';
+import { dances, fits } from '../db/schema';
+import { danceFacts } from '../dances/dance-json';
+
+const TRACK_SQL = `SELECT id, title, artist, duration_s, bpm, offset_s, meter, phrase_beats, intro_beats
+	FROM tracks`;
+
+type TrackTuple = [number, string, string, number, number | null, number, number, number, number];
+
+const factsOf = (r: TrackTuple): TrackFacts => ({
+	id: r[0],
+	title: r[1],
+	artist: r[2],
+	durationS: r[3],
+	bpm: r[4],
+	offsetS: r[5],
+	meter: r[6] === 3 ? 3 : 4,
+	phraseBeats: r[7],
+	introBeats: r[8]
+});
+
+/**
+ * Every track's fit facts. A raw prepared statement returning arrays skips the ORM's per-row
+ * mapping, which is most of the cost at 10,000 rows; the column list is fixed here, not
+ * built from input.
+ */
+export function loadTrackFacts(): TrackFacts[] {
+	const rows = db().$client.prepare(TRACK_SQL).raw(true).all() as TrackTuple[];
+	return rows.map(factsOf);
+}
+
+export function loadTrackFact(id: number): TrackFacts | null {
+	const row = db().$client.prepare(`${TRACK_SQL} WHERE id = ?`).raw(true).get(id) as
+		TrackTuple | undefined;
+	return row ? factsOf(row) : null;
+}
+
+export const loadDanceRows = () => db().select().from(dances).all();
+
+export function loadDanceFacts(): DanceFacts[] {
+	return loadDanceRows().map(danceFacts);
+}
+
+export interface StoredVerdict extends TeamVerdict {
+	notes: string;
+	lessonRate: number | null;
+}
+
+/** A 'fits-at-rate' stored at rate 1 means "at some rate": the engine then picks the best. */
+function asVerdict(row: {
+	verdict: TeamVerdict['verdict'];
+	rate: number;
+	notes: string;
+	lessonRate: number | null;
+}): StoredVerdict {
+	const rate = row.verdict === 'fits-at-rate' && row.rate === 1 ? null : row.rate;
+	return { verdict: row.verdict, rate, notes: row.notes, lessonRate: row.lessonRate };
+}
+
+const VERDICT_COLUMNS = {
+	trackId: fits.trackId,
+	danceId: fits.danceId,
+	verdict: fits.verdict,
+	rate: fits.rate,
+	notes: fits.notes,
+	lessonRate: fits.lessonRate
+};
+
+export function verdictsForDance(danceId: number): Map<number, StoredVerdict> {
+	const rows = db().select(VERDICT_COLUMNS).from(fits).where(eq(fits.danceId, danceId)).all();
+	return new Map(rows.map((r) => [r.trackId, asVerdict(r)]));
+}
+
+export function verdictsForTrack(trackId: number): Map<number, StoredVerdict> {
+	const rows = db().select(VERDICT_COLUMNS).from(fits).where(eq(fits.trackId, trackId)).all();
+	return new Map(rows.map((r) => [r.danceId, asVerdict(r)]));
+}

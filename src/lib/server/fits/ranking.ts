@@ -1,0 +1,100 @@
+// Fits from the database: the engine's ranking over every track (or dance) with the team's
+// verdicts, in the shape the fits API and the pages send.
+import type { DanceFacts, TrackFacts } from '../../domain';
+import { rankDancesForTrack, rankFits, type FitItem } from '../../fit';
+import { danceRow } from '../dances/catalogue';
+import { danceFacts, danceJson, type DanceJson } from '../dances/dance-json';
+import {
+	loadDanceRows,
+	loadTrackFact,
+	loadTrackFacts,
+	verdictsForDance,
+	verdictsForTrack,
+	type StoredVerdict
+} from './load';
+import { fitSettings } from './settings';
+
+export const DEFAULT_FIT_LIMIT = 50;
+export const MAX_FIT_LIMIT = 10_000;
+
+export type TrackSummary = Omit<TrackFacts, 'meter'> & { meter: 3 | 4 };
+
+export interface FitJson {
+	score: number;
+	verdict: FitItem['verdict'];
+	/** The team's chosen rate and notes, when it has given a verdict. */
+	decision: { rate: number | null; notes: string; lessonRate: number | null } | null;
+	tempo: FitItem['tempo'];
+	phrasing: FitItem['phrasing'];
+	reasons: string[];
+}
+
+function fitJson(item: FitItem, stored: StoredVerdict | undefined): FitJson {
+	return {
+		score: item.score,
+		verdict: item.verdict,
+		decision: stored
+			? { rate: stored.rate ?? null, notes: stored.notes, lessonRate: stored.lessonRate }
+			: null,
+		tempo: item.tempo,
+		phrasing: item.phrasing,
+		reasons: item.reasons
+	};
+}
+
+/** `?limit=` as a whole number within bounds, or the default. */
+export function parseLimit(text: string | null): number | null {
+	if (text == null || text === '') return DEFAULT_FIT_LIMIT;
+	if (!/^\d+$/.test(text)) return null;
+	const n = Number(text);
+	return n >= 1 && n <= MAX_FIT_LIMIT ? n : null;
+}
+
+export interface DanceFits {
+	dance: DanceJson;
+	facts: DanceFacts;
+	items: (FitJson & { track: TrackFacts })[];
+	/** Every track's facts, for callers that go on to lesson music without reading them twice. */
+	tracks: TrackFacts[];
+	verdicts: Map<number, StoredVerdict>;
+}
+
+export function fitsForDance(danceId: number, limit = DEFAULT_FIT_LIMIT): DanceFits | null {
+	const row = danceRow(danceId);
+	if (!row) return null;
+	const facts = danceFacts(row);
+	const tracks = loadTrackFacts();
+	const verdicts = verdictsForDance(danceId);
+	const ranked = rankFits(facts, tracks, verdicts, fitSettings(), limit);
+	const byId = new Map<number, TrackFacts>();
+	for (const t of tracks) byId.set(t.id, t);
+	return {
+		dance: danceJson(row),
+		facts,
+		tracks,
+		verdicts,
+		items: ranked.map((item) => ({
+			track: byId.get(item.trackId)!,
+			...fitJson(item, verdicts.get(item.trackId))
+		}))
+	};
+}
+
+export interface TrackFits {
+	track: TrackFacts;
+	items: (FitJson & { dance: DanceJson })[];
+}
+
+export function fitsForTrack(trackId: number, limit = DEFAULT_FIT_LIMIT): TrackFits | null {
+	const track = loadTrackFact(trackId);
+	if (!track) return null;
+	const rows = loadDanceRows();
+	const byId = new Map(rows.map((r) => [r.id, r]));
+	const verdicts = verdictsForTrack(trackId);
+	const ranked = rankDancesForTrack(track, rows.map(danceFacts), verdicts, fitSettings(), limit);
+	const items = ranked.map((item) => ({
+		dance: danceJson(byId.get(item.danceId)!),
+		...fitJson(item, verdicts.get(item.danceId))
+	}));
+	return { track, items };
+}

@@ -1,0 +1,58 @@
+// The team's verdict on a track for a dance: one row per pair, replaced by the latest word.
+import { sql } from 'drizzle-orm';
+import { fitTrackToDance } from '../../fit';
+import type { FitVerdictInput } from '../../schemas/dance';
+import { danceRow } from '../dances/catalogue';
+import { danceFacts } from '../dances/dance-json';
+import { db } from '../db';
+import { fits } from '../db/schema';
+import { loadTrackFact } from './load';
+import { fitSettings } from './settings';
+
+export type VerdictResult =
+	{ ok: true; fit: typeof fits.$inferSelect } | { ok: false; status: 404 | 422; error: string };
+
+/**
+ * Upserts the verdict, decided by `userId`. 'fits-at-rate' without a rate takes the rate the
+ * engine finds best for the pair; 'fits' without one means as recorded (1).
+ */
+export function setVerdict(input: FitVerdictInput, userId: number): VerdictResult {
+	const track = loadTrackFact(input.trackId);
+	if (!track) return { ok: false, status: 404, error: 'No such track.' };
+	const dance = danceRow(input.danceId);
+	if (!dance) return { ok: false, status: 404, error: 'No such dance.' };
+	let rate = input.rate ?? null;
+	if (rate == null && input.verdict === 'fits-at-rate') {
+		const computed = fitTrackToDance(track, danceFacts(dance), null, fitSettings(), false);
+		if (computed.tempo.trackBpm == null) {
+			return { ok: false, status: 422, error: 'Measure the track’s tempo before choosing a rate.' };
+		}
+		rate = computed.tempo.rate;
+	}
+	rate ??= 1;
+	const values = {
+		trackId: input.trackId,
+		danceId: input.danceId,
+		verdict: input.verdict,
+		rate,
+		decidedBy: userId,
+		updatedAt: new Date(),
+		...(input.notes !== undefined ? { notes: input.notes } : {})
+	};
+	const fit = db()
+		.insert(fits)
+		.values(values)
+		.onConflictDoUpdate({
+			target: [fits.trackId, fits.danceId],
+			set: {
+				verdict: values.verdict,
+				rate: values.rate,
+				decidedBy: userId,
+				updatedAt: values.updatedAt,
+				notes: input.notes !== undefined ? input.notes : sql`${fits.notes}`
+			}
+		})
+		.returning()
+		.get();
+	return { ok: true, fit };
+}
