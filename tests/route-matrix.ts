@@ -23,6 +23,60 @@ export interface MatrixRow {
 const TEAM = ['admin', 'organiser', 'dj', 'instructor'] as const;
 
 export const MATRIX: MatrixRow[] = [
+	// Dance catalogue and fits (issue 4): reading is readDances, changing is dances (instructor),
+	// verdicts are fits (dj, instructor). Mutations use an unknown id or an invalid body.
+	{
+		method: 'GET',
+		route: '/api/dances',
+		path: '/api/dances?level=beginner',
+		allowed: 'everyone signed in'
+	},
+	{ method: 'POST', route: '/api/dances', path: '/api/dances', allowed: ['instructor'], body: {} },
+	{
+		method: 'GET',
+		route: '/api/dances/[id]',
+		path: '/api/dances/1',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'PATCH',
+		route: '/api/dances/[id]',
+		path: '/api/dances/1',
+		allowed: ['instructor'],
+		body: {}
+	},
+	{
+		method: 'DELETE',
+		route: '/api/dances/[id]',
+		path: '/api/dances/999999',
+		allowed: ['instructor']
+	},
+	{
+		method: 'GET',
+		route: '/api/dances/[id]/fits',
+		path: '/api/dances/1/fits?limit=5',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'GET',
+		route: '/api/dances/[id]/sheet',
+		path: '/api/dances/1/sheet',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'GET',
+		route: '/api/dances/export',
+		path: '/api/dances/export',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'GET',
+		route: '/api/tracks/[id]/fits',
+		path: '/api/tracks/1/fits?limit=5',
+		allowed: ['dj', 'instructor', 'organiser']
+	},
+	{ method: 'PUT', route: '/api/fits', path: '/api/fits', allowed: ['dj', 'instructor'], body: {} },
+	// end of dance catalogue and fits rows
 	{
 		method: 'GET',
 		route: '/healthz',
@@ -38,7 +92,37 @@ export const MATRIX: MatrixRow[] = [
 		path: '/api/invitations',
 		allowed: ['admin'],
 		body: { email: 'not-an-email' }
+	},
+	// Music library (issue 3): reading is readMusic (dj, instructor, organiser), changing is tracks (dj).
+	{
+		method: 'GET',
+		route: '/api/tracks',
+		path: '/api/tracks?limit=5',
+		allowed: ['dj', 'instructor', 'organiser']
+	},
+	{
+		method: 'POST',
+		route: '/api/tracks',
+		path: '/api/tracks',
+		allowed: ['dj'],
+		body: { not: 'multipart' }
+	},
+	{
+		method: 'GET',
+		route: '/api/tracks/[id]',
+		path: '/api/tracks/1',
+		allowed: ['dj', 'instructor', 'organiser']
+	},
+	{ method: 'PATCH', route: '/api/tracks/[id]', path: '/api/tracks/1', allowed: ['dj'], body: {} },
+	// A track id that does not exist, so the allowed roles get 404 and nothing is deleted.
+	{ method: 'DELETE', route: '/api/tracks/[id]', path: '/api/tracks/999999', allowed: ['dj'] },
+	{
+		method: 'GET',
+		route: '/api/tracks/[id]/audio',
+		path: '/api/tracks/1/audio',
+		allowed: ['dj', 'instructor', 'organiser']
 	}
+	// end of music library rows
 ];
 
 export { TEAM };

@@ -1,0 +1,88 @@
+// Zod schemas for the tracks API, shared by the routes (which validate) and the music page
+// (which builds the same shapes). One schema per body or query.
+import { z } from 'zod';
+import { TEMPO_SOURCES, VERDICTS } from '../domain';
+
+const bpm = z.number().gt(0).lt(400);
+const meter = z.union([z.literal(3), z.literal(4)]);
+
+/** The browser's analysis, sent beside the file on upload. */
+export const analysisSchema = z.object({
+	bpm: bpm.nullable(),
+	rawBpm: bpm.nullable().optional(),
+	offsetS: z.number().min(0).max(3600).default(0),
+	confidence: z.number().min(0).max(1).nullable().optional(),
+	source: z.enum(TEMPO_SOURCES).default('detected'),
+	meter: meter.default(4),
+	candidates: z
+		.array(z.object({ bpm, score: z.number().finite() }))
+		.max(16)
+		.default([]),
+	/** The browser may read the tags too; the server's own reading wins when it has one. */
+	title: z.string().max(300).optional(),
+	artist: z.string().max(300).optional(),
+	album: z.string().max(300).optional()
+});
+export type Analysis = z.infer<typeof analysisSchema>;
+
+const text = (max: number) => z.string().trim().max(max);
+
+export const patchSchema = z
+	.object({
+		version: z.number().int().positive(),
+		title: text(300).min(1, 'A title cannot be empty.').optional(),
+		artist: text(300).optional(),
+		album: text(300).optional(),
+		bpm: bpm.nullable().optional(),
+		bpmSource: z.enum(TEMPO_SOURCES).optional(),
+		offsetS: z.number().min(0).max(3600).optional(),
+		meter: meter.optional(),
+		phraseBeats: z.number().int().min(1).max(256).optional(),
+		introBeats: z.number().int().min(0).max(1024).optional()
+	})
+	.strict();
+export type TrackPatch = z.infer<typeof patchSchema>;
+
+export const SORTS = [
+	'bpm',
+	'-bpm',
+	'title',
+	'-title',
+	'artist',
+	'-artist',
+	'album',
+	'-album',
+	'durationS',
+	'-durationS',
+	'createdAt',
+	'-createdAt',
+	'confidence',
+	'-confidence'
+] as const;
+export type TrackSort = (typeof SORTS)[number];
+
+export const MAX_LIMIT = 500;
+
+const optionalNumber = z.preprocess(
+	(v) => (v === '' || v === null ? undefined : v),
+	z.coerce.number().finite().optional()
+);
+
+/** `unjudged` means: no verdict yet (for the dance given, or for any dance). */
+export const VERDICT_FILTERS = [...VERDICTS, 'unjudged'] as const;
+
+export const listQuerySchema = z.object({
+	q: z.string().trim().max(200).optional(),
+	bpmMin: optionalNumber,
+	bpmMax: optionalNumber,
+	meter: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().pipe(meter).optional()),
+	dance: z.preprocess(
+		(v) => (v === '' ? undefined : v),
+		z.coerce.number().int().positive().optional()
+	),
+	verdict: z.enum(VERDICT_FILTERS).optional(),
+	sort: z.enum(SORTS).default('title'),
+	limit: z.coerce.number().int().min(1).max(MAX_LIMIT).default(100),
+	cursor: z.string().max(1000).optional()
+});
+export type TrackListQuery = z.infer<typeof listQuerySchema>;

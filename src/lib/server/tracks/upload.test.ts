@@ -1,0 +1,205 @@
+// The upload pipeline against a real SQLite and a real upload folder: what is stored, what is
+// refused, and that a refusal or a failure leaves no row and no file behind.
+import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { parseBuffer } from 'music-metadata';
+import { writeId3 } from '$lib/synth/id3.node';
+import { resetConfig } from '../config';
+import { tracks } from '../db/schema';
+import type { Storage } from '../storage';
+import { makeTestDb } from '../testing/test-db';
+import { analysisJson, mp3, png, tempStorage, text, wav } from './test-fixtures';
+import { uploadTrack } from './upload';
+
+let t: ReturnType<typeof makeTestDb>;
+let s: ReturnType<typeof tempStorage>;
+beforeEach(() => {
+	t = makeTestDb();
+	s = tempStorage();
+});
+afterEach(() => {
+	s.cleanup();
+	t.cleanup();
+	delete process.env.MAX_UPLOAD_MB;
+	resetConfig();
+});
+
+const rows = () => t.db.select().from(tracks).all();
+const upload = (bytes: Uint8Array, o: { name?: string; analysis?: string | null } = {}) =>
+	uploadTrack({
+		bytes,
+		fileName: o.name ?? 'song.wav',
+		analysis: o.analysis === undefined ? analysisJson() : o.analysis,
+		uploadedBy: null
+	});
+
+describe('a good upload', () => {
+	test('stores the file under its SHA-256 and writes the row (201)', async () => {
+		const { bytes, song } = wav(120, 4);
+		const r = await upload(bytes, { name: 'Barn Dance.wav' });
+		expect(r.ok && r.status).toBe(201);
+		if (!r.ok) return;
+		expect(r.duplicate).toBe(false);
+		// 16-bit mono PCM: duration = data bytes ÷ (rate × 2) (RIFF/WAVE header arithmetic).
+		expect(r.track.durationS).toBeCloseTo((bytes.length - 44) / (song.sampleRate * 2), 6);
+		expect(r.track).toMatchObject({
+			title: 'Barn Dance',
+			bpm: 120,
+			rawBpm: 120,
+			bpmSource: 'detected',
+			meter: 4,
+			phraseBeats: 32,
+			introBeats: 0,
+			mimeType: 'audio/wav',
+			fileSize: bytes.length,
+			originalName: 'Barn Dance.wav',
+			version: 1
+		});
+		expect(r.track.sha256).toMatch(/^[a-f0-9]{64}$/);
+		expect(s.files()).toEqual([`audio/${r.track.sha256}.wav`]);
+		expect(rows()).toHaveLength(1);
+	});
+
+	test('the same file twice gives the existing track with duplicate: true (200)', async () => {
+		const { bytes } = wav(100, 3);
+		const first = await upload(bytes);
+		const again = await upload(bytes, { name: 'copy.wav' });
+		expect(again).toMatchObject({ ok: true, status: 200, duplicate: true });
+		expect(first.ok && again.ok && again.track.id === first.track.id).toBe(true);
+		expect(rows()).toHaveLength(1);
+		expect(s.files()).toHaveLength(1);
+	});
+
+	test('a 3/4 track gets a 24-beat phrase (8 bars)', async () => {
+		const r = await upload(wav(90, 4, 3).bytes, { analysis: analysisJson({ bpm: 90, meter: 3 }) });
+		expect(r.ok && r.track.phraseBeats).toBe(24);
+	});
+
+	test('ID3 tags (TBPM among them) fill the facts; TBPM stays beside the measurement', async () => {
+		// Written by node-id3, an independent writer; TBPM per id3.org "ID3 tag version 2.4.0 –
+		// Native Frames" §4.2.3 (an integer as a numerical string).
+		const tagged = writeId3(mp3(128, 3), {
+			title: 'Copperwick Morning',
+			artist: 'The Invented Few',
+			album: 'Made Up',
+			bpm: 128
+		});
+		const r = await upload(tagged, { name: 'x.mp3', analysis: analysisJson({ bpm: 127.6 }) });
+		expect(r.ok).toBe(true);
+		if (!r.ok) return;
+		expect(r.track).toMatchObject({
+			title: 'Copperwick Morning',
+			artist: 'The Invented Few',
+			album: 'Made Up',
+			tagBpm: 128,
+			bpm: 127.6,
+			mimeType: 'audio/mpeg'
+		});
+		const meta = await parseBuffer(tagged, { mimeType: 'audio/mpeg' });
+		expect(r.track.durationS).toBeCloseTo(meta.format.duration!, 3);
+	});
+
+	test('without a measured tempo the BPM tag is used and the source says "tag"', async () => {
+		const tagged = writeId3(mp3(96, 3), { title: 'Slow One', bpm: 96 });
+		const r = await upload(tagged, { analysis: analysisJson({ bpm: null, rawBpm: null }) });
+		expect(r.ok && { bpm: r.track.bpm, src: r.track.bpmSource }).toEqual({ bpm: 96, src: 'tag' });
+	});
+
+	test('a hostile file name is kept only as display text', async () => {
+		const hostile = '../../etc/\u202Egnp.\u0007passwd\u0000.mp3';
+		const r = await upload(wav(110, 3).bytes, { name: hostile });
+		expect(r.ok).toBe(true);
+		if (!r.ok) return;
+		expect(r.track.originalName).toBe('gnp.passwd.mp3');
+		expect(r.track.title).toBe('gnp.passwd');
+		// The only file is under audio/ by its hash: nothing named after the upload.
+		expect(s.files()).toEqual([`audio/${r.track.sha256}.wav`]);
+		const long = await upload(wav(111, 3).bytes, { name: `${'ü'.repeat(500)}.wav` });
+		expect(long.ok && [...long.track.originalName].length).toBe(200);
+	});
+});
+
+describe('bad input: a clear 4xx with an error, no row, no file', () => {
+	const cases: [string, () => Uint8Array, { name?: string; analysis?: string | null }, number][] = [
+		['an empty file', () => new Uint8Array(0), {}, 422],
+		['truncated audio (a WAV cut after 200 bytes)', () => wav().bytes.slice(0, 200), {}, 422],
+		['truncated audio (a WAV cut in half)', () => wav(120, 6).bytes.slice(0, 24_000), {}, 422],
+		['an MP3 cut to its first frame', () => mp3().slice(0, 300), {}, 422],
+		['a text file renamed .mp3', () => text(), { name: 'lyrics.mp3' }, 415],
+		['a PNG', () => png(), { name: 'cover.mp3' }, 415],
+		['hostile name on a text file', () => text(), { name: '../../etc/passwd.mp3' }, 415],
+		['missing analysis', () => wav().bytes, { analysis: null }, 400],
+		['empty analysis', () => wav().bytes, { analysis: '  ' }, 400],
+		['malformed analysis JSON', () => wav().bytes, { analysis: '{"bpm": 12' }, 400],
+		[
+			'analysis with a tempo in words',
+			() => wav().bytes,
+			{ analysis: analysisJson({ bpm: 'fast' }) },
+			422
+		],
+		['analysis with meter 5', () => wav().bytes, { analysis: analysisJson({ meter: 5 }) }, 422],
+		[
+			'analysis with an unknown source',
+			() => wav().bytes,
+			{ analysis: analysisJson({ source: 'guessed' }) },
+			422
+		]
+	];
+	for (const [what, bytes, o, status] of cases) {
+		test(`${what} → ${status}`, async () => {
+			const r = await upload(bytes(), o);
+			expect(r.ok).toBe(false);
+			if (r.ok) return;
+			expect(r.status).toBe(status);
+			expect(r.error.length).toBeGreaterThan(10);
+			expect(rows()).toHaveLength(0);
+			expect(s.files()).toEqual([]);
+		});
+	}
+
+	test('a file over MAX_UPLOAD_MB → 413', async () => {
+		process.env.MAX_UPLOAD_MB = '0.05';
+		resetConfig();
+		const r = await upload(wav(120, 8).bytes);
+		expect(r).toMatchObject({ ok: false, status: 413 });
+		expect(!r.ok && r.error).toContain('0.05 MB');
+		expect(rows()).toHaveLength(0);
+		expect(s.files()).toEqual([]);
+	});
+
+	test('the error messages name the problem', async () => {
+		const empty = await upload(new Uint8Array(0));
+		expect(!empty.ok && empty.error).toMatch(/empty/);
+		const picture = await upload(png());
+		expect(!picture.ok && picture.error).toMatch(/image\/png/);
+		const cut = await upload(wav().bytes.slice(0, 200));
+		expect(!cut.ok && cut.error).toMatch(/cut off/);
+	});
+});
+
+describe('failures leave neither the row nor the file', () => {
+	test('when the row cannot be written, the stored file is removed', async () => {
+		t.db.$client.exec(
+			`CREATE TRIGGER refuse BEFORE INSERT ON tracks BEGIN SELECT RAISE(ABORT, 'disk full'); END`
+		);
+		await expect(upload(wav().bytes)).rejects.toThrow(/disk full/);
+		expect(rows()).toHaveLength(0);
+		expect(s.files()).toEqual([]);
+	});
+
+	test('when the file cannot be written, no row is written', async () => {
+		const broken: Storage = {
+			...s.store,
+			put: async () => {
+				throw new Error('no space left on device');
+			}
+		};
+		await expect(
+			uploadTrack(
+				{ bytes: wav().bytes, fileName: 'a.wav', analysis: analysisJson(), uploadedBy: null },
+				broken
+			)
+		).rejects.toThrow(/no space/);
+		expect(rows()).toHaveLength(0);
+		expect(s.files()).toEqual([]);
+	});
+});
