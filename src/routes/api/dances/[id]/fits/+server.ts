@@ -1,0 +1,16 @@
+import { json } from '@sveltejs/kit';
+import { requireRight } from '$lib/server/guard';
+import { badRequest } from '$lib/server/json-body';
+import { idParam } from '$lib/server/dances/ids';
+import { fitsForDance, MAX_FIT_LIMIT, parseLimit } from '$lib/server/fits/ranking';
+import type { RequestHandler } from './$types';
+
+export const GET = ((event) => {
+	requireRight(event, 'readDances');
+	const id = idParam(event.params.id);
+	const limit = parseLimit(event.url.searchParams.get('limit'));
+	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
+	const result = id ? fitsForDance(id, limit) : null;
+	if (!result) return badRequest('No such dance.', 404);
+	return json({ dance: result.dance, items: result.items });
+}) satisfies RequestHandler;
