@@ -92,7 +92,37 @@ export const MATRIX: MatrixRow[] = [
 		path: '/api/invitations',
 		allowed: ['admin'],
 		body: { email: 'not-an-email' }
+	},
+	// Music library (issue 3): reading is readMusic (dj, instructor, organiser), changing is tracks (dj).
+	{
+		method: 'GET',
+		route: '/api/tracks',
+		path: '/api/tracks?limit=5',
+		allowed: ['dj', 'instructor', 'organiser']
+	},
+	{
+		method: 'POST',
+		route: '/api/tracks',
+		path: '/api/tracks',
+		allowed: ['dj'],
+		body: { not: 'multipart' }
+	},
+	{
+		method: 'GET',
+		route: '/api/tracks/[id]',
+		path: '/api/tracks/1',
+		allowed: ['dj', 'instructor', 'organiser']
+	},
+	{ method: 'PATCH', route: '/api/tracks/[id]', path: '/api/tracks/1', allowed: ['dj'], body: {} },
+	// A track id that does not exist, so the allowed roles get 404 and nothing is deleted.
+	{ method: 'DELETE', route: '/api/tracks/[id]', path: '/api/tracks/999999', allowed: ['dj'] },
+	{
+		method: 'GET',
+		route: '/api/tracks/[id]/audio',
+		path: '/api/tracks/1/audio',
+		allowed: ['dj', 'instructor', 'organiser']
 	}
+	// end of music library rows
 ];
 
 export { TEAM };
