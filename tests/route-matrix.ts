@@ -23,6 +23,62 @@ export interface MatrixRow {
 const TEAM = ['admin', 'organiser', 'dj', 'instructor'] as const;
 
 export const MATRIX: MatrixRow[] = [
+	// evenings (issue 5): reads for every role (dancers see published evenings only), writes for
+	// organisers; bodies are invalid (422) or ids missing (404) so the matrix changes nothing.
+	{ method: 'GET', route: '/api/evenings', path: '/api/evenings', allowed: 'everyone signed in' },
+	{
+		method: 'POST',
+		route: '/api/evenings',
+		path: '/api/evenings',
+		allowed: ['organiser'],
+		body: {}
+	},
+	{
+		method: 'GET',
+		route: '/api/evenings/[id]',
+		path: '/api/evenings/1',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'PATCH',
+		route: '/api/evenings/[id]',
+		path: '/api/evenings/1',
+		allowed: ['organiser'],
+		body: { startsAt: 'not a date' }
+	},
+	{
+		method: 'DELETE',
+		route: '/api/evenings/[id]',
+		path: '/api/evenings/999999',
+		allowed: ['organiser']
+	},
+	{
+		method: 'POST',
+		route: '/api/evenings/[id]/plan',
+		path: '/api/evenings/1/plan',
+		allowed: ['organiser'],
+		body: { seed: 'not a number' }
+	},
+	{
+		method: 'GET',
+		route: '/api/evenings/[id]/run-order',
+		path: '/api/evenings/1/run-order',
+		allowed: 'everyone signed in'
+	},
+	{
+		method: 'PUT',
+		route: '/api/evenings/[id]/run-order',
+		path: '/api/evenings/1/run-order',
+		allowed: ['organiser'],
+		body: { version: 0, entries: [] }
+	},
+	{
+		method: 'GET',
+		route: '/api/evenings/[id]/suggestions',
+		path: '/api/evenings/1/suggestions?danceId=1',
+		allowed: ['organiser']
+	},
+	// end of evenings rows
 	// Dance catalogue and fits (issue 4): reading is readDances, changing is dances (instructor),
 	// verdicts are fits (dj, instructor). Mutations use an unknown id or an invalid body.
 	{

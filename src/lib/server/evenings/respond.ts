@@ -1,0 +1,23 @@
+// Route helpers: an evening id from the URL, and refusals as JSON `{ error }` with their status.
+import { error, json } from '@sveltejs/kit';
+import { EveningError } from './errors';
+
+/** The `[id]` parameter as a positive integer, or a 404. */
+export function eveningIdOf(params: { id?: string }): number {
+	const id = Number(params.id);
+	if (!Number.isSafeInteger(id) || id <= 0 || String(id) !== params.id) {
+		error(404, { message: 'There is no such evening.', error: 'There is no such evening.' });
+	}
+	return id;
+}
+
+/** Runs `fn`; an EveningError becomes its JSON answer, anything else is rethrown. */
+export function answer(fn: () => Response): Response {
+	try {
+		return fn();
+	} catch (e) {
+		if (e instanceof EveningError)
+			return json({ error: e.message, ...e.extra }, { status: e.status });
+		throw e;
+	}
+}
