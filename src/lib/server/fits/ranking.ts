@@ -7,7 +7,7 @@ import { danceFacts, danceJson, type DanceJson } from '../dances/dance-json';
 import {
 	loadDanceRows,
 	loadTrackFact,
-	loadTrackFacts,
+	trackFacts,
 	verdictsForDance,
 	verdictsForTrack,
 	type StoredVerdict
@@ -16,8 +16,6 @@ import { fitSettings } from './settings';
 
 export const DEFAULT_FIT_LIMIT = 50;
 export const MAX_FIT_LIMIT = 10_000;
-
-export type TrackSummary = Omit<TrackFacts, 'meter'> & { meter: 3 | 4 };
 
 export interface FitJson {
 	score: number;
@@ -63,11 +61,9 @@ export function fitsForDance(danceId: number, limit = DEFAULT_FIT_LIMIT): DanceF
 	const row = danceRow(danceId);
 	if (!row) return null;
 	const facts = danceFacts(row);
-	const tracks = loadTrackFacts();
+	const { facts: tracks, byId } = trackFacts();
 	const verdicts = verdictsForDance(danceId);
 	const ranked = rankFits(facts, tracks, verdicts, fitSettings(), limit);
-	const byId = new Map<number, TrackFacts>();
-	for (const t of tracks) byId.set(t.id, t);
 	return {
 		dance: danceJson(row),
 		facts,

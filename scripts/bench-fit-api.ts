@@ -1,0 +1,179 @@
+// Benchmark of the fits API's server side (issue 4 target: one dance over 10,000 tracks under
+// 50 ms): a temporary SQLite database with the real migrations, 10,000 invented tracks and a few
+// hundred verdicts, timed through fitsForDance — reading the tracks and verdicts included — and
+// through fitsForTrack for the other direction. Deterministic: the same invented library each run.
+import { mkdtempSync, rmSync } from 'node:fs';
+import { cpus, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { openDb, useDb } from '../src/lib/server/db';
+import { dances, fits, tracks, users } from '../src/lib/server/db/schema';
+import { fitsForDance, fitsForTrack } from '../src/lib/server/fits/ranking';
+import { loadTrackFacts } from '../src/lib/server/fits/load';
+
+const TRACKS = 10_000;
+const RUNS = 40;
+const WARM_UP = 5;
+
+/** mulberry32: a small seeded generator. */
+function random(seed: number): () => number {
+	return () => {
+		seed = (seed + 0x6d2b79f5) | 0;
+		let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
+		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+	};
+}
+const rand = random(20261202);
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
+
+const dir = mkdtempSync(join(tmpdir(), 'floorset-bench-'));
+const db = openDb(join(dir, 'bench.db'));
+useDb(db);
+
+const user = db
+	.insert(users)
+	.values({ email: 'bench@floorset.test', name: 'Bench' })
+	.returning()
+	.get();
+const danceIds = db.transaction((tx) =>
+	[
+		{
+			name: 'Invented Stroll',
+			counts: 32,
+			walls: 4,
+			rhythm: 'shuffle',
+			meter: 4,
+			min: 110,
+			max: 128
+		},
+		{ name: 'Invented Waltz', counts: 48, walls: 2, rhythm: 'waltz', meter: 3, min: 84, max: 100 },
+		{ name: 'Invented Cha', counts: 40, walls: 4, rhythm: 'cha-cha', meter: 4, min: 100, max: 116 }
+	].map(
+		(d) =>
+			tx
+				.insert(dances)
+				.values({
+					name: d.name,
+					counts: d.counts,
+					walls: d.walls,
+					level: 'beginner',
+					rhythm: d.rhythm,
+					meter: d.meter,
+					bpmMin: d.min,
+					bpmMax: d.max,
+					turn: 'left',
+					events:
+						d.counts === 40 ? [{ kind: 'tag', repetition: 3, afterCount: 40, lengthCounts: 4 }] : []
+				})
+				.returning()
+				.get().id
+	)
+);
+
+db.transaction((tx) => {
+	for (let i = 0; i < TRACKS; i++) {
+		const meter = rand() < 0.15 ? 3 : 4;
+		const sha = (i + 1).toString(16).padStart(64, '0');
+		tx.insert(tracks)
+			.values({
+				title: `Invented Song ${i + 1}`,
+				artist: `Invented Band ${(i % 97) + 1}`,
+				album: 'Invented Album',
+				durationS: 120 + rand() * 240,
+				bpm: rand() < 0.05 ? null : Math.round((60 + rand() * 150) * 10) / 10,
+				offsetS: rand() * 1.5,
+				candidates: [{ bpm: 100, score: 0.5 }],
+				meter,
+				phraseBeats: meter === 3 ? pick([24, 48]) : pick([32, 32, 32, 16, 64]),
+				introBeats: pick([0, 0, 4, 8, 16, 32]),
+				mimeType: 'audio/mpeg',
+				fileSize: 4_000_000,
+				sha256: sha,
+				storageKey: `audio/${sha}.mp3`,
+				originalName: `invented-${i + 1}.mp3`
+			})
+			.run();
+	}
+	for (const danceId of danceIds) {
+		for (let trackId = 1; trackId <= TRACKS; trackId++) {
+			const r = rand();
+			if (r >= 0.03) continue;
+			const verdict = r < 0.015 ? 'fits' : r < 0.02 ? 'fits-at-rate' : 'does-not-fit';
+			tx.insert(fits)
+				.values({
+					trackId,
+					danceId,
+					verdict,
+					rate: verdict === 'fits-at-rate' ? 0.95 : 1,
+					decidedBy: user.id
+				})
+				.run();
+		}
+	}
+});
+
+function stats(ms: number[]) {
+	const s = [...ms].sort((a, b) => a - b);
+	return {
+		median: s[Math.floor(s.length / 2)],
+		p95: s[Math.min(s.length - 1, Math.ceil(s.length * 0.95) - 1)]
+	};
+}
+
+function time(label: string, f: () => unknown, before?: () => void): number {
+	const times: number[] = [];
+	for (let run = 0; run < WARM_UP + RUNS; run++) {
+		before?.();
+		const t0 = performance.now();
+		f();
+		const ms = performance.now() - t0;
+		if (run >= WARM_UP) times.push(ms);
+	}
+	const { median, p95 } = stats(times);
+	console.log(`${label.padEnd(48)} median ${median.toFixed(2)} ms  p95 ${p95.toFixed(2)} ms`);
+	return p95;
+}
+
+console.log(
+	`bench:fit-api — ${TRACKS} invented tracks in SQLite, ${RUNS} runs after ${WARM_UP} warm-up, ${cpus().length} CPUs`
+);
+time('load track facts only', () => loadTrackFacts());
+// A verdict written between rankings costs only the tracks' signature check; a track edit
+// (its version bumped, as the music API does) makes the next ranking read every track again.
+let flip = 0;
+const verdictWrite = () =>
+	db.$client
+		.prepare('UPDATE fits SET notes = ? WHERE rowid = (SELECT min(rowid) FROM fits)')
+		.run(String(flip++));
+const trackEdit = () =>
+	db.$client
+		.prepare('UPDATE tracks SET version = version + 1 WHERE id = ?')
+		.run(1 + (flip++ % 100));
+let worst = 0;
+let worstVerdict = 0;
+let worstCold = 0;
+for (const id of danceIds) {
+	for (const limit of [50, 500]) {
+		const label = `fitsForDance(${id}, limit ${limit})`;
+		worst = Math.max(
+			worst,
+			time(`${label}, tracks cached`, () => fitsForDance(id, limit))
+		);
+		const afterVerdict = time(
+			`${label}, after a verdict`,
+			() => fitsForDance(id, limit),
+			verdictWrite
+		);
+		worstVerdict = Math.max(worstVerdict, afterVerdict);
+		const cold = time(`${label}, after a track edit`, () => fitsForDance(id, limit), trackEdit);
+		worstCold = Math.max(worstCold, cold);
+	}
+}
+time('fitsForTrack(1, limit 50)', () => fitsForTrack(1, 50));
+const met = (ms: number) => `${ms.toFixed(2)} ms — target < 50 ms ${ms < 50 ? 'met' : 'NOT met'}`;
+console.log(`worst p95 of fitsForDance, tracks cached: ${met(worst)}`);
+console.log(`worst p95 of fitsForDance, after a verdict: ${met(worstVerdict)}`);
+console.log(`worst p95 of fitsForDance, tracks read again after a track edit: ${met(worstCold)}`);
+
+db.$client.close();
+rmSync(dir, { recursive: true, force: true });
