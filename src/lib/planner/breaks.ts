@@ -36,6 +36,9 @@ function breakItem(minDur: number, maxDur: number): Item {
 	return it;
 }
 
+/** The shortest stretch worth leaving after a break: about one track. */
+const SCRAP_S = 240;
+
 export function planBreaks(problem: Problem, plan: Plan): Plan {
 	const s = problem.settings;
 	const limit = s.breakEveryMin * 60;
@@ -45,7 +48,19 @@ export function planBreaks(problem: Problem, plan: Plan): Plan {
 	const out: Plan = [];
 	let acc = 0;
 	let lastEnd = 0;
-	for (const slot of plan) {
+	// Dancing in the fixed slots right after each slot (locked dances, say), before any rest: a
+	// break must come before them if they would pass the limit.
+	const ahead = plan.map((_, i) => {
+		let sum = 0;
+		for (let j = i + 1; j < plan.length && plan[j].kind === 'fixed'; j++) {
+			for (const it of plan[j].items) {
+				if (it.kind === 'break') return sum;
+				if (it.kind === 'dance' || it.kind === 'walkthrough') sum += it.dur;
+			}
+		}
+		return sum;
+	});
+	for (const [index, slot] of plan.entries()) {
 		if (slot.start - lastEnd >= len) acc = 0;
 		if (slot.kind === 'fixed') {
 			sizeStretch(problem, slot);
@@ -63,13 +78,14 @@ export function planBreaks(problem: Problem, plan: Plan): Plan {
 		let cur = slot;
 		for (let guard = 0; guard < 100; guard++) {
 			const span = cur.hi - cur.start;
-			if (acc + span <= limit) {
+			const later = ahead[index];
+			if (acc + span + later <= limit) {
 				acc += span;
 				out.push(cur);
 				lastEnd = cur.hi;
 				break;
 			}
-			if (span < len + 60) {
+			if (cur.target - cur.start < len + gap + 60) {
 				// Too short to hold music and a break: the slot becomes the rest.
 				cur.items.push(breakItem(0, Infinity));
 				cur.lo = cur.hi = cur.target;
@@ -81,9 +97,11 @@ export function planBreaks(problem: Problem, plan: Plan): Plan {
 			// Music may end no later than the limit allows; the break follows.
 			let musicEnd = Math.max(cur.start, cur.start + (limit - acc));
 			let breakEnd = musicEnd + gap + len;
-			// A break that would leave only a scrap of the slot after it ends the slot instead.
-			if (breakEnd > cur.target || cur.target - breakEnd - gap < 240) {
-				breakEnd = cur.target;
+			// A break that would leave only a scrap of the slot after it comes earlier, so that some
+			// dancing follows it; if the slot has no room for that, the break ends the slot.
+			if (breakEnd > cur.target - gap - SCRAP_S) {
+				const earlier = cur.target - gap - SCRAP_S;
+				breakEnd = earlier - gap - len >= cur.start ? earlier : cur.target;
 				musicEnd = breakEnd - gap - len;
 			}
 			const head: Slot = {
@@ -97,8 +115,8 @@ export function planBreaks(problem: Problem, plan: Plan): Plan {
 			acc = 0;
 			lastEnd = breakEnd;
 			if (cur.target - breakEnd - gap <= 1) break;
-			cur = { ...cur, start: breakEnd + gap, items: [] };
-			cur.lo = Math.max(cur.lo, cur.start);
+			cur = { ...cur, start: breakEnd + gap, emptyEnd: breakEnd, items: [] };
+			cur.lo = Math.max(cur.lo, breakEnd);
 		}
 	}
 	return out;

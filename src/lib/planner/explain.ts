@@ -141,7 +141,7 @@ export function toEntries(problem: Problem, plan: Plan): PlanEntry[] {
 			durationS: item.dur,
 			rate: c ? c.rate : (lock?.data.rate ?? 1),
 			locked: item.locked,
-			sectionId: lock?.data.sectionId ?? section?.id ?? null,
+			sectionId: section?.id ?? lock?.data.sectionId ?? null,
 			...(lock?.data.title ? { title: lock.data.title } : {}),
 			reasons
 		};

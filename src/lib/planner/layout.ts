@@ -42,7 +42,7 @@ export function place(problem: Problem, plan: Plan): Placed[] {
 
 /** Where a slot's entries end (its start when empty). */
 export function slotEnd(problem: Problem, slot: Slot): number {
-	if (slot.items.length === 0) return slot.start;
+	if (slot.items.length === 0) return slot.emptyEnd;
 	let t = slot.start + problem.settings.gapS * (slot.items.length - 1);
 	for (const it of slot.items) t += it.dur;
 	const last = slot.items[slot.items.length - 1];

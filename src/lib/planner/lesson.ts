@@ -9,6 +9,9 @@ const room = (s: Slot) => s.target - s.start;
 function fillLesson(problem: Problem, slots: Slot[], dance: number, used: Set<number>): void {
 	const { gapS, teachLengthMin, walkthroughLengthMin } = problem.settings;
 	const free = slots.filter((s) => s.items.length === 0);
+	// Locked plays inside the lesson belong to it: no repeat rule, no social-dance preferences.
+	for (const s of slots)
+		for (const i of s.items) if (i.locked && i.kind === 'dance' && i.cand) i.lesson = true;
 	const hasLockedPlay = slots.some((s) =>
 		s.items.some(
 			(i) =>

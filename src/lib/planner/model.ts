@@ -78,6 +78,8 @@ export interface Slot {
 	hi: number;
 	/** Where a stretching entry (teach, break section) aims to end. */
 	target: number;
+	/** Where the run order stands if the slot stays empty: the end of what came before it. */
+	emptyEnd: number;
 	items: Item[];
 }
 

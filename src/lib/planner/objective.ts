@@ -250,7 +250,8 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 			const start = t;
 			const end = t + it.dur;
 			if (start - lastEnd >= restGap) restWalk(w);
-			if (end > problem.eveningS + EPS && !it.locked) hardAdd(end - problem.eveningS);
+			// Past the evening's end is never traded for anything else.
+			if (end > problem.eveningS + EPS && !it.locked) hardAdd(HARD * 1000);
 			if (it.kind === 'break') {
 				if (it.inserted) terms.breaks += 0.3;
 				restWalk(w);
@@ -295,7 +296,7 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 			lastEnd = end;
 		}
 		if (slot.lo > -Infinity) {
-			const end = items.length ? t : slot.start;
+			const end = items.length ? t : slot.emptyEnd;
 			if (end > slot.hi + EPS) hardAdd((end - slot.hi) * 5);
 			else if (end < slot.lo - EPS) {
 				// Music that stops short of a planned break only leaves the floor idle a little.

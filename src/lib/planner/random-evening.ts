@@ -40,7 +40,8 @@ function sectionsFor(shape: Shape, lessonDance: number): PlanSection[] {
 		? shape.kinds
 		: ['lesson', 'open-floor', 'request-block', 'break', 'open-floor', 'last-dance'];
 	const total = shape.minutes * 60;
-	const w = kinds.map((_, i) => shape.weights[i]);
+	// Enough-music evenings keep the usual proportions (a 3/16 lesson, a short last dance).
+	const w = shape.kinds.length ? kinds.map((_, i) => shape.weights[i]) : [3, 4, 2, 1, 5, 1];
 	const sum = w.reduce((a, b) => a + b, 0);
 	let t = 0;
 	return kinds.map((kind, i) => {

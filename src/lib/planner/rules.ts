@@ -70,7 +70,8 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 				p.slot.section === l.section &&
 				p.item.kind === 'dance' &&
 				p.item.cand?.dance === l.dance &&
-				(p.item.lesson || (p.item.locked && isLessonTempo(problem, p.item.cand)))
+				p.item.lesson &&
+				(!p.item.locked || isLessonTempo(problem, p.item.cand))
 		);
 		if (!inLesson)
 			out.push(`The lesson has no practice dance of ${name(l.dance)} at lesson tempo.`);

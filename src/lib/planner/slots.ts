@@ -68,13 +68,10 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 	const ordered = orderLocks(problem, locks);
 	const slots: Slot[] = [];
 	const secs = problem.sections;
+	// The section a lock starts in; at a boundary the later section; between sections the earlier.
 	const sectionOf = (t: number) => {
-		let found = -1;
-		secs.forEach((s, i) => {
-			if (t >= s.startS && (t < s.endS || (found < 0 && t <= s.endS)))
-				found = found < 0 ? i : found;
-		});
-		if (found >= 0) return found;
+		const inside = secs.findIndex((s) => t >= s.startS && t < s.endS);
+		if (inside >= 0) return inside;
 		let prev = -1;
 		secs.forEach((s, i) => {
 			if (s.startS <= t) prev = i;
@@ -88,6 +85,7 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 		lo: -Infinity,
 		hi: Infinity,
 		target: l.startS + l.entry.durationS,
+		emptyEnd: l.startS,
 		items: [lockItem(problem, l)]
 	}));
 	let cursor = 0;
@@ -95,6 +93,7 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 	secs.forEach((sec, si) => {
 		const nextSec = si + 1 < secs.length ? secs[si + 1].startS : problem.eveningS;
 		cursor = Math.max(cursor, sec.startS);
+		let before = cursor;
 		const kind = sec.kind === 'lesson' || sec.kind === 'break' ? 'fixed' : 'dance';
 		for (;;) {
 			const lock = li < lockSlots.length ? lockSlots[li] : null;
@@ -107,14 +106,16 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 						kind,
 						section: si,
 						start: cursor,
-						lo: Math.max(cursor, hi - tol),
+						lo: Math.max(before, hi - tol),
 						hi,
 						target: hi,
+						emptyEnd: before,
 						items: []
 					});
 				}
 				slots.push(lock);
 				cursor = Math.max(cursor, lock.target + gapS);
+				before = Math.max(before, lock.target);
 				li++;
 				continue;
 			}
@@ -126,9 +127,10 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 					kind,
 					section: si,
 					start: cursor,
-					lo: Math.max(cursor, Math.min(target, sec.endS - tol)),
+					lo: Math.max(before, Math.min(target, sec.endS - tol)),
 					hi,
 					target,
+					emptyEnd: before,
 					items: []
 				});
 			}
