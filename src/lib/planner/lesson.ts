@@ -4,7 +4,8 @@ import { danceItem, fixedItem, stretchItem } from './items';
 import type { Plan, Problem, Slot } from './model';
 import { isLessonTempo, lessonCands } from './prepare';
 
-const room = (s: Slot) => s.target - s.start;
+// A hair of slack so that a track exactly as long as the slot still fits despite rounding.
+const room = (s: Slot) => s.target - s.start + 1e-6;
 
 function fillLesson(problem: Problem, slots: Slot[], dance: number, used: Set<number>): void {
 	const { gapS, teachLengthMin, walkthroughLengthMin } = problem.settings;
