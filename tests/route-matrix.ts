@@ -79,6 +79,46 @@ export const MATRIX: MatrixRow[] = [
 		allowed: ['organiser']
 	},
 	// end of evenings rows
+	// Sharing an evening (issue 5, "Getting it to people"): exports are readEvenings (a dancer
+	// only for published evenings: demo evening 1 is published); e-mail and publishing are
+	// organisers'. Mutations use an empty body (422) or an unknown id (404), so nothing changes.
+	// Not in this table, because they are pages, not API routes: the public page /e/<token>, its
+	// poster and its request form (a form action, ?/request) need no sign-in and are tested in
+	// tests/share.spec.ts (signed out: page, QR, no private data, request stored, 404 after
+	// unpublishing) and src/lib/server/share/share.test.ts; the print page /evenings/[id]/print
+	// takes the exports' rights (requireRight 'readEvenings', checked by route-coverage.test.ts).
+	...(['csv', 'm3u8', 'pdf', 'ics'] as const).map((ext): MatrixRow => ({
+		method: 'GET',
+		route: `/api/evenings/[id]/export.${ext}`,
+		path: `/api/evenings/1/export.${ext}`,
+		allowed: 'everyone signed in'
+	})),
+	{
+		method: 'GET',
+		route: '/api/evenings/[id]/email',
+		path: '/api/evenings/1/email',
+		allowed: ['organiser']
+	},
+	{
+		method: 'POST',
+		route: '/api/evenings/[id]/email',
+		path: '/api/evenings/1/email',
+		allowed: ['organiser'],
+		body: {}
+	},
+	{
+		method: 'POST',
+		route: '/api/evenings/[id]/publish',
+		path: '/api/evenings/999999/publish',
+		allowed: ['organiser']
+	},
+	{
+		method: 'DELETE',
+		route: '/api/evenings/[id]/publish',
+		path: '/api/evenings/999999/publish',
+		allowed: ['organiser']
+	},
+	// end of sharing rows
 	// Dance catalogue and fits (issue 4): reading is readDances, changing is dances (instructor),
 	// verdicts are fits (dj, instructor). Mutations use an unknown id or an invalid body.
 	{

@@ -1,0 +1,44 @@
+// Who may read an evening's exports and print sheet: the team (readEvenings) always; a person
+// who is only a dancer just for published evenings. A draft is "not found" to them, so the
+// answer tells nothing about which drafts exist.
+import { error } from '@sveltejs/kit';
+import { z } from 'zod';
+import { config } from '../config';
+import type { SessionUser } from '../users';
+import { loadSheet } from './load-sheet';
+import type { RunSheet } from './sheet';
+
+export const eveningIdSchema = z.coerce.number().int().positive().max(Number.MAX_SAFE_INTEGER);
+
+export function notFound(message = 'No such evening.'): never {
+	error(404, { message, error: message });
+}
+
+export function eveningId(raw: string): number {
+	const parsed = eveningIdSchema.safeParse(raw);
+	if (!parsed.success || !/^\d+$/.test(raw)) notFound();
+	return parsed.data;
+}
+
+export const isTeam = (user: SessionUser) => user.roles.some((r) => r !== 'dancer');
+
+/**
+ * The run sheet of evening `rawId` for a person the route let through with
+ * requireRight(event, 'readEvenings'); 404 for a draft when they are only a dancer.
+ */
+export function readableSheet(user: SessionUser, rawId: string): RunSheet {
+	const sheet = loadSheet(eveningId(rawId), config().origin);
+	if (!sheet || (!isTeam(user) && !sheet.published)) notFound();
+	return sheet;
+}
+
+/** Attachment headers with a file name made from the evening's id only, never from its text. */
+export function download(body: BodyInit, type: string, id: number, ext: string): Response {
+	return new Response(body, {
+		headers: {
+			'content-type': type,
+			'content-disposition': `attachment; filename="evening-${id}.${ext}"`,
+			'cache-control': 'private, no-store'
+		}
+	});
+}
