@@ -1,6 +1,6 @@
 // Opaque keyset cursors: the sort the page was read in, the last row's sort key and its id.
 // A cursor only continues the sort it was made for; anything else is refused, never guessed.
-import type { TrackSort } from '$lib/music/track-schemas';
+import type { TrackSort } from '../../music/track-schemas';
 
 export interface Cursor {
 	sort: TrackSort;

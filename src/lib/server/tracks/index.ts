@@ -1,4 +1,5 @@
 // The tracks feature on the server: list, read, edit, delete, upload and stream.
+// (Relative imports, not $lib, so the benchmark script can load this module under tsx.)
 export { listTracks, BadCursorError } from './list-tracks';
 export {
 	getTrack,

@@ -1,6 +1,6 @@
 // The tracks list against a real SQLite: search, filters, sorts and keyset pages.
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
-import { listQuerySchema } from '$lib/music/track-schemas';
+import { listQuerySchema } from '../../music/track-schemas';
 import { dances, fits, tracks } from '../db/schema';
 import { makeTestDb } from '../testing/test-db';
 import { listTracks } from './list-tracks';

@@ -1,8 +1,8 @@
 // GET /api/tracks: search, filters, sort and keyset pages. Keyset (not offset) paging so a page
 // deep in 10,000 tracks costs the same as the first and rows added meanwhile do not shift pages.
 import { and, eq, getTableColumns, gte, lte, sql, type SQL } from 'drizzle-orm';
-import type { TrackListQuery, TrackSort } from '$lib/music/track-schemas';
-import type { TrackPage } from '$lib/music/track-types';
+import type { TrackListQuery, TrackSort } from '../../music/track-schemas';
+import type { TrackPage } from '../../music/track-types';
 import { db } from '../db';
 import { fits, tracks } from '../db/schema';
 import { decodeCursor, encodeCursor } from './cursor';

@@ -2,8 +2,8 @@
 import { mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Meter } from '$lib/domain';
-import { encodeMp3, encodeWav, generateSong } from '$lib/synth';
+import type { Meter } from '../../domain';
+import { encodeMp3, encodeWav, generateSong } from '../../synth/index';
 import { diskStorage, useStorage, type Storage } from '../storage';
 
 export function wav(bpm = 120, durationS = 4, meter: Meter = 4, seed = 1) {

@@ -1,7 +1,7 @@
 // A tracks row as the API's JSON: the columns the issue lists, dates as ISO strings, and never
 // the storage key or the uploader's id.
-import type { Meter } from '$lib/domain';
-import type { TrackJson } from '$lib/music/track-types';
+import type { Meter } from '../../domain';
+import type { TrackJson } from '../../music/track-types';
 import type { tracks } from '../db/schema';
 
 export type TrackRow = typeof tracks.$inferSelect;

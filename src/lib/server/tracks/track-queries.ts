@@ -1,8 +1,8 @@
 // One track: read, edit with optimistic locking (the row's version), delete with its audio.
 import { and, eq, sql } from 'drizzle-orm';
-import type { Meter } from '$lib/domain';
-import type { TrackPatch } from '$lib/music/track-schemas';
-import { defaultPhraseBeats, type TrackJson } from '$lib/music/track-types';
+import type { Meter } from '../../domain';
+import type { TrackPatch } from '../../music/track-schemas';
+import { defaultPhraseBeats, type TrackJson } from '../../music/track-types';
 import { db } from '../db';
 import { tracks } from '../db/schema';
 import { storage, type Storage } from '../storage';

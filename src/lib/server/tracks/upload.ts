@@ -6,8 +6,8 @@
 import { createHash } from 'node:crypto';
 import { eq } from 'drizzle-orm';
 import { describeIssue } from '../json-body';
-import { analysisSchema, type Analysis } from '$lib/music/track-schemas';
-import { defaultPhraseBeats, type TrackJson } from '$lib/music/track-types';
+import { analysisSchema, type Analysis } from '../../music/track-schemas';
+import { defaultPhraseBeats, type TrackJson } from '../../music/track-types';
 import { config } from '../config';
 import { db } from '../db';
 import { tracks } from '../db/schema';
