@@ -9,8 +9,13 @@ import { decoyHash, verifyPassword } from '$lib/server/passwords';
 import { findUserByEmail } from '$lib/server/users';
 
 export const credentialsSchema = z.object({
-	email: z.string().trim().toLowerCase().email('Enter an e-mail address.').max(254),
-	password: z.string().min(1, 'Enter your password.').max(200)
+	email: z
+		.string()
+		.trim()
+		.toLowerCase()
+		.max(254, 'That e-mail address is too long.')
+		.email('Enter an e-mail address.'),
+	password: z.string().min(1, 'Enter your password.').max(200, 'That password is too long.')
 });
 
 export const { handle, signIn, signOut } = SvelteKitAuth(

@@ -8,7 +8,12 @@ export const roleList = z
 	.max(ROLES.length);
 
 export const inviteSchema = z.object({
-	email: z.string().trim().toLowerCase().email('Enter an e-mail address.').max(254),
+	email: z
+		.string()
+		.trim()
+		.toLowerCase()
+		.max(254, 'That e-mail address is too long.')
+		.email('Enter an e-mail address.'),
 	name: z
 		.string()
 		.trim()

@@ -20,7 +20,8 @@ export const actions = {
 	default: async (event) => {
 		publicRoute(event);
 		const form = await event.request.clone().formData();
-		const email = String(form.get('email') ?? '');
+		// Echoed back into the form; a hostile length is cut, never stored.
+		const email = String(form.get('email') ?? '').slice(0, 254);
 		const parsed = credentialsSchema.safeParse({ email, password: form.get('password') });
 		if (!parsed.success) {
 			return fail(400, { email, message: parsed.error.issues[0]?.message ?? WRONG });

@@ -1,0 +1,474 @@
+// Hostile input, as a table: uploads, forms, API bodies and query strings that a careless or
+// malicious client might send. Each must get a clear 4xx with a message a person can read —
+// never a 5xx — and leave every table and the upload folder exactly as they were. Runs on a
+// private server (own port, database and uploads) so other tests' writes do not blur the counts.
+import { expect, test } from '@playwright/test';
+import Database from 'better-sqlite3';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { encodeWav, generateSong } from '../src/lib/synth/index';
+import { kill, signInCookie, startInstance, type Instance } from './support-server';
+
+const PORT = Number(process.env.E2E_PORT ?? 4173) + 60;
+
+type Body =
+	| { json: unknown }
+	| { raw: string; type: string }
+	| { upload: Uint8Array; name: string; analysis?: string | null; type?: string }
+	| { form: Record<string, string> };
+
+interface Hostile {
+	what: string;
+	as: 'dj' | 'instructor' | 'organiser' | 'admin' | 'anon';
+	method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+	path: string;
+	body?: Body;
+	status?: number;
+}
+
+const song = generateSong({ bpm: 120, meter: 4, durationS: 8, seed: 5, sampleRate: 22050 });
+const goodWav = encodeWav(song.samples, song.sampleRate);
+const text = new TextEncoder();
+const okAnalysis = JSON.stringify({ bpm: 120, source: 'detected', meter: 4 });
+const nested = (depth: number) => '['.repeat(depth) + ']'.repeat(depth);
+const goodDance = {
+	name: 'Hollowmere Hop',
+	counts: 32,
+	walls: 4,
+	level: 'beginner',
+	bpmMin: 100,
+	bpmMax: 120
+};
+
+const TABLE: Hostile[] = [
+	// Uploads (issue 3's list and issue 6's)
+	{
+		what: 'an empty file',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: new Uint8Array(), name: 'empty.mp3', analysis: okAnalysis }
+	},
+	{
+		what: 'truncated audio',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav.slice(0, 600), name: 'cut.wav', analysis: okAnalysis }
+	},
+	{
+		what: 'a text file renamed .mp3',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: {
+			upload: text.encode('just some words, not music\n'.repeat(50)),
+			name: 'song.mp3',
+			analysis: okAnalysis
+		}
+	},
+	{
+		what: 'a renamed executable',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: {
+			upload: new Uint8Array([0x7f, 0x45, 0x4c, 0x46, 2, 1, 1, 0, ...new Array(500).fill(0)]),
+			name: 'tune.mp3',
+			analysis: okAnalysis
+		}
+	},
+	{
+		what: 'a zip archive',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: {
+			upload: new Uint8Array([0x50, 0x4b, 0x03, 0x04, 20, 0, 0, 0, ...new Array(500).fill(0)]),
+			name: 'album.mp3',
+			analysis: okAnalysis
+		}
+	},
+	{
+		what: 'an oversized file (over MAX_UPLOAD_MB)',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: new Uint8Array(2.2 * 1024 * 1024), name: 'big.wav', analysis: okAnalysis },
+		status: 413
+	},
+	{
+		what: 'a path-traversal name on a non-audio file',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: {
+			upload: text.encode('x'.repeat(2000)),
+			name: '../../../etc/passwd',
+			analysis: okAnalysis
+		}
+	},
+	{
+		what: 'malformed analysis JSON',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'a.wav', analysis: '{"bpm": 120,' }
+	},
+	{
+		what: 'an absurd tempo in the analysis',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'a.wav', analysis: JSON.stringify({ bpm: 40000, meter: 4 }) }
+	},
+	{
+		what: 'a negative tempo in the analysis',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'a.wav', analysis: JSON.stringify({ bpm: -120, meter: 4 }) }
+	},
+	{
+		what: 'a meter of 7 in the analysis',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'a.wav', analysis: JSON.stringify({ bpm: 120, meter: 7 }) }
+	},
+	{
+		what: 'an upload sent as JSON',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { json: { file: 'AAAA' } }
+	},
+	// API bodies
+	{
+		what: 'a body that is not JSON',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { raw: 'name=Hop', type: 'text/plain' }
+	},
+	{
+		what: 'truncated JSON',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { raw: '{"name": "Hop", "counts": 3', type: 'application/json' }
+	},
+	{
+		what: 'deeply nested JSON',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { raw: nested(100_000), type: 'application/json' }
+	},
+	{
+		what: 'a huge JSON body (2 MB)',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: {
+			raw: JSON.stringify({ ...goodDance, notes: 'n'.repeat(2 * 1024 * 1024) }),
+			type: 'application/json'
+		},
+		status: 413
+	},
+	{
+		what: 'counts of the wrong type',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, counts: 'many' } }
+	},
+	{
+		what: 'negative counts',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, counts: -32 } }
+	},
+	{
+		what: 'absurd counts',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, counts: 1e9 } }
+	},
+	{
+		what: 'three walls',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, walls: 3 } }
+	},
+	{
+		what: 'a tempo range upside down',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, bpmMin: 140, bpmMax: 90 } }
+	},
+	{
+		what: 'a tempo of 5,000 BPM',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, bpmMax: 5000 } }
+	},
+	{
+		what: 'an over-long name',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, name: 'Hop'.repeat(5000) } }
+	},
+	{
+		what: 'control characters in a name',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, name: 'Hop\u0000\u0007' } }
+	},
+	{
+		what: 'a right-to-left override in a name',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, name: 'Hop\u202egnp.exe' } }
+	},
+	{
+		what: 'a SQL-looking number',
+		as: 'instructor',
+		method: 'POST',
+		path: '/api/dances',
+		body: { json: { ...goodDance, counts: '32; DROP TABLE dances' } }
+	},
+	{
+		what: 'a stale version',
+		as: 'dj',
+		method: 'PATCH',
+		path: '/api/tracks/1',
+		body: { json: { version: 999, title: 'Renamed' } },
+		status: 409
+	},
+	{
+		what: 'an unknown field',
+		as: 'dj',
+		method: 'PATCH',
+		path: '/api/tracks/1',
+		body: { json: { version: 1, owner: 'me' } }
+	},
+	{
+		what: 'a verdict that does not exist',
+		as: 'dj',
+		method: 'PUT',
+		path: '/api/fits',
+		body: { json: { trackId: 1, danceId: 1, verdict: 'maybe' } }
+	},
+	{
+		what: 'a fit for a track that does not exist',
+		as: 'dj',
+		method: 'PUT',
+		path: '/api/fits',
+		body: { json: { trackId: 999999, danceId: 1, verdict: 'fits' } },
+		status: 404
+	},
+	// Query strings
+	{
+		what: 'a tempo filter that is not a number',
+		as: 'dj',
+		method: 'GET',
+		path: '/api/tracks?bpmMin=fast'
+	},
+	{
+		what: 'a SQL-looking tempo filter',
+		as: 'dj',
+		method: 'GET',
+		path: '/api/tracks?bpmMin=1%20OR%201%3D1'
+	},
+	{ what: 'an absurd page size', as: 'dj', method: 'GET', path: '/api/tracks?limit=100000' },
+	{ what: 'a forged cursor', as: 'dj', method: 'GET', path: '/api/tracks?cursor=%27%3B--' },
+	{ what: 'an unknown sort', as: 'dj', method: 'GET', path: '/api/tracks?sort=password_hash' },
+	{
+		what: 'a track id that is not a number',
+		as: 'dj',
+		method: 'GET',
+		path: '/api/tracks/..%2F..%2Fetc'
+	},
+	// Forms
+	{
+		what: 'an e-mail of 10,000 characters at sign-in',
+		as: 'anon',
+		method: 'POST',
+		path: '/signin',
+		body: { form: { email: `${'a'.repeat(10_000)}@x.test`, password: 'x' } }
+	},
+	{
+		what: 'an invitation with a right-to-left override in the name',
+		as: 'admin',
+		method: 'POST',
+		path: '/api/invitations',
+		body: { json: { email: 'rtl@floorset.test', name: 'Ada\u202e', roles: ['dancer'] } }
+	},
+	{
+		what: 'an invitation with an unknown role',
+		as: 'admin',
+		method: 'POST',
+		path: '/api/invitations',
+		body: { json: { email: 'role@floorset.test', name: 'Ada', roles: ['superuser'] } }
+	}
+];
+
+let dir: string;
+let instance: Instance;
+const cookies = new Map<string, string>();
+
+test.describe.configure({ mode: 'serial', timeout: 120_000 });
+
+test.beforeAll(async () => {
+	dir = mkdtempSync(join(tmpdir(), 'floorset-hostile-'));
+	process.env.DATABASE_URL = join(dir, 'floorset.db');
+	process.env.UPLOAD_DIR = join(dir, 'uploads');
+	process.env.SEED_CACHE_DIR ??= 'data/seed-cache';
+	const { seed } = await import('../scripts/seed');
+	await seed();
+	const { db } = await import('../src/lib/server/db');
+	db().$client.close();
+	process.env.MAX_UPLOAD_MB = '2';
+	instance = await startInstance({
+		port: PORT,
+		databaseUrl: join(dir, 'floorset.db'),
+		uploadDir: join(dir, 'uploads')
+	});
+	for (const role of ['dj', 'instructor', 'organiser', 'admin']) {
+		cookies.set(role, await signInCookie(instance.base, `${role}@floorset.test`));
+	}
+});
+test.afterAll(async () => {
+	if (instance) await kill(instance);
+	rmSync(dir, { recursive: true, force: true });
+});
+
+/** Row counts of every table and the number of stored files. */
+function snapshot() {
+	const sqlite = new Database(join(dir, 'floorset.db'), { readonly: true });
+	const tables = sqlite
+		.prepare(
+			"select name from sqlite_master where type = 'table' and name not like '\\_%' escape '\\' and name != 'sign_in_failures'"
+		)
+		.pluck()
+		.all() as string[];
+	const counts = Object.fromEntries(
+		tables.map((t) => [t, sqlite.prepare(`select count(*) from "${t}"`).pluck().get()])
+	);
+	sqlite.close();
+	const files = ['audio', 'sheets'].flatMap((d) => {
+		try {
+			return readdirSync(join(dir, 'uploads', d));
+		} catch {
+			return [];
+		}
+	});
+	return { counts, files: files.sort() };
+}
+
+async function send(row: Hostile) {
+	const headers: Record<string, string> = { origin: instance.base, accept: 'application/json' };
+	if (row.as !== 'anon') headers.cookie = cookies.get(row.as)!;
+	let body: BodyInit | undefined;
+	const b = row.body;
+	if (b && 'json' in b) {
+		headers['content-type'] = 'application/json';
+		body = JSON.stringify(b.json);
+	} else if (b && 'raw' in b) {
+		headers['content-type'] = b.type;
+		body = b.raw;
+	} else if (b && 'upload' in b) {
+		const form = new FormData();
+		form.set('file', new Blob([b.upload], { type: b.type ?? 'application/octet-stream' }), b.name);
+		if (b.analysis != null) form.set('analysis', b.analysis);
+		body = form;
+	} else if (b && 'form' in b) {
+		headers['content-type'] = 'application/x-www-form-urlencoded';
+		body = new URLSearchParams(b.form).toString();
+	}
+	const call = () => fetch(`${instance.base}${row.path}`, { method: row.method, headers, body });
+	try {
+		return await call();
+	} catch {
+		// An early 413 closes the connection before the body is read; the client's kept-alive
+		// socket then fails once, as any HTTP client would see, so try again on a fresh one.
+		return call();
+	}
+}
+
+test('the table has at least 30 hostile inputs', () => {
+	expect(TABLE.length).toBeGreaterThanOrEqual(30);
+});
+
+for (const row of TABLE) {
+	test(`${row.method} ${row.path.split('?')[0]}: ${row.what}`, async () => {
+		const before = snapshot();
+		const res = await send(row);
+		const payload = await res.text();
+		// A form action answers a fetch with {type: 'failure', status} (SvelteKit's enhance protocol).
+		const failure = /^\{"type":"failure","status":(\d+)/.exec(payload);
+		const status = failure ? Number(failure[1]) : res.status;
+		const shown = payload.slice(0, 300);
+		if (row.status) expect(status, shown).toBe(row.status);
+		expect(status, shown).toBeGreaterThanOrEqual(400);
+		expect(status, shown).toBeLessThan(500);
+		// A message a person understands: a sentence, not a stack trace or a bare code.
+		let message = payload;
+		try {
+			const parsed = JSON.parse(payload);
+			message =
+				parsed.error ?? parsed.message ?? (typeof parsed.data === 'string' ? parsed.data : '');
+		} catch {
+			/* a form action's answer may be HTML or devalue text */
+		}
+		expect(String(message).length, shown).toBeGreaterThan(8);
+		expect(String(message), 'no raw validator wording').not.toMatch(/expected (string|number)/);
+		expect(payload).not.toMatch(/\bat .+\.(js|ts):\d+/); // no stack trace
+		expect(snapshot(), 'nothing written').toEqual(before);
+	});
+}
+
+test('a SQL-looking search is just text: answered, nothing changed', async () => {
+	const before = snapshot();
+	const res = await send({
+		what: '',
+		as: 'dj',
+		method: 'GET',
+		path: '/api/tracks?q=%27%20OR%201%3D1%20--'
+	});
+	expect(res.status).toBe(200);
+	expect((await res.json()).total).toBe(0);
+	expect(snapshot()).toEqual(before);
+});
+
+test('the same file twice gives the existing track and no second row', async () => {
+	const first = await send({
+		what: '',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'twice.wav', analysis: okAnalysis }
+	});
+	expect(first.status).toBe(201);
+	const before = snapshot();
+	const again = await send({
+		what: '',
+		as: 'dj',
+		method: 'POST',
+		path: '/api/tracks',
+		body: { upload: goodWav, name: 'twice-again.wav', analysis: okAnalysis }
+	});
+	expect(again.status).toBe(200);
+	expect((await again.json()).duplicate).toBe(true);
+	expect(snapshot()).toEqual(before);
+});
