@@ -1,7 +1,7 @@
 // Scratch: resolution accuracy on generated songs in Node (no detector).
 import { generateSong } from '../../src/lib/synth/song';
 import { analysePcm } from '../../src/lib/tempo/resolve';
-const rate = 11025;
+const rate = Number(process.env.RATE ?? 11025);
 let a1 = 0,
 	a2 = 0,
 	n = 0,

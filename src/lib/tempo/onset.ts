@@ -2,7 +2,7 @@
 // estimation (e.g. Müller, "Fundamentals of Music Processing", 2015, ch. 6 — from memory).
 // Each frame sums the rise in log magnitude over the bins; a moving average is taken away so
 // sustained sound (a pad, steady noise) does not count, only what starts.
-import { fft, nextPow2 } from './fft';
+import { fft } from './fft';
 
 export interface Envelope {
 	/** Novelty per frame, ≥ 0. */
@@ -30,7 +30,8 @@ const BASS_HZ = 250;
 
 export function onsetEnvelope(pcm: Float32Array, sampleRate: number): Envelope {
 	const hop = Math.max(1, Math.round(sampleRate * HOP_S));
-	const n = nextPow2(sampleRate * WINDOW_S);
+	// The power of two nearest 23 ms (256 samples at 11.025–12 kHz).
+	const n = 2 ** Math.round(Math.log2(sampleRate * WINDOW_S));
 	const frames = Math.max(0, Math.floor((pcm.length - n) / hop) + 1);
 	const hann = new Float64Array(n);
 	for (let i = 0; i < n; i++) hann[i] = 0.5 - 0.5 * Math.cos((2 * Math.PI * i) / n);
