@@ -135,3 +135,44 @@ export function fieldErrors(error: z.ZodError): Record<string, string> {
 	}
 	return out;
 }
+
+/** One tag or restart row of the dance form, as typed. */
+export interface EventRow {
+	kind: 'tag' | 'restart';
+	repetition: string;
+	afterCount: string;
+	lengthCounts: string;
+}
+
+/** What the form shows: text as typed, so a bad number can be corrected in place. */
+export interface DanceFormValues {
+	name: string;
+	counts: string;
+	walls: string;
+	level: string;
+	rhythm: string;
+	meter: string;
+	bpmMin: string;
+	bpmMax: string;
+	turn: string;
+	notes: string;
+	choreographer: string;
+	wellKnown: boolean;
+	events: EventRow[];
+}
+
+export const emptyDanceValues = (): DanceFormValues => ({
+	name: '',
+	counts: '32',
+	walls: '4',
+	level: 'beginner',
+	rhythm: 'other',
+	meter: '4',
+	bpmMin: '',
+	bpmMax: '',
+	turn: '',
+	notes: '',
+	choreographer: '',
+	wellKnown: false,
+	events: []
+});
