@@ -21,6 +21,18 @@ export const firstName = (name: string | null) => name?.trim().split(/\s+/)[0] |
 export const shareUrlOf = (origin: string, token: string) =>
 	`${origin.replace(/\/$/, '')}/e/${encodeURIComponent(token)}`;
 
+/** A teach or walkthrough without a dance of its own is of its lesson section's dance. */
+function lessonDance(evening: EveningJson, e: EveningJson['entries'][number]): string | null {
+	if (e.danceName || (e.kind !== 'teach' && e.kind !== 'walkthrough')) return e.danceName;
+	const at = Date.parse(e.startsAt);
+	const section =
+		evening.sections.find((s) => s.id === e.sectionId) ??
+		evening.sections.find(
+			(s) => s.kind === 'lesson' && Date.parse(s.startsAt) <= at && at < Date.parse(s.endsAt)
+		);
+	return section?.kind === 'lesson' ? section.danceName : null;
+}
+
 export function toSheet(evening: EveningJson, origin: string, lengths = new Map<number, number>()) {
 	const sheet: RunSheet = {
 		id: evening.id,
@@ -48,7 +60,7 @@ export function toSheet(evening: EveningJson, origin: string, lengths = new Map<
 			startsAt: Date.parse(e.startsAt),
 			durationS: e.durationS,
 			danceId: e.danceId,
-			danceName: e.danceName,
+			danceName: lessonDance(evening, e),
 			level: e.danceLevel,
 			trackId: e.trackId,
 			trackTitle: e.trackTitle,

@@ -1,0 +1,250 @@
+// Getting the evening to people, end to end in Chromium: exports, publishing and the old link's
+// 404, the public page signed out (QR, nothing private), a dancer's request reaching the team,
+// and the run order e-mailed with its two attachments into the captured outbox.
+import { expect, request as newRequest, test, type APIRequestContext } from '@playwright/test';
+import ICAL from 'ical.js';
+import Papa from 'papaparse';
+import { BASE, signIn, signInApi } from './helpers';
+
+test.describe.configure({ mode: 'serial' });
+
+const EVENING = 1; // the demo's published "Lantern Night Social"
+let organiser: APIRequestContext;
+let anon: APIRequestContext;
+
+const headers = { origin: BASE, accept: 'application/json' };
+
+/** Evening 1 has no run order in the seed: plan one and save it through the team's API. */
+async function ensureRunOrder(api: APIRequestContext) {
+	const current = await (await api.get(`/api/evenings/${EVENING}/run-order`)).json();
+	if (current.entries.length > 0) return current.entries.length as number;
+	const planned = await api.post(`/api/evenings/${EVENING}/plan`, { data: { seed: 5 }, headers });
+	expect(planned.status()).toBe(200);
+	const { entries } = await planned.json();
+	const saved = await api.put(`/api/evenings/${EVENING}/run-order`, {
+		data: { version: current.runOrderVersion, entries },
+		headers
+	});
+	expect(saved.status(), await saved.text()).toBe(200);
+	return entries.length as number;
+}
+
+test.beforeAll(async () => {
+	organiser = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(organiser, 'organiser');
+	anon = await newRequest.newContext({ baseURL: BASE });
+	await ensureRunOrder(organiser);
+});
+
+test.afterAll(async () => {
+	await organiser.dispose();
+	await anon.dispose();
+});
+
+test('exports download as attachments and read back with independent parsers', async () => {
+	const entries = (await (await organiser.get(`/api/evenings/${EVENING}/run-order`)).json())
+		.entries as { kind: string; trackId: number | null }[];
+	const csv = await organiser.get(`/api/evenings/${EVENING}/export.csv`);
+	expect(csv.status()).toBe(200);
+	expect(csv.headers()['content-disposition']).toBe(
+		`attachment; filename="evening-${EVENING}.csv"`
+	);
+	// papaparse reading RFC 4180 CSV: one record per entry after the header.
+	const rows = Papa.parse<string[]>(await csv.text(), { newline: '\r\n' }).data.filter(
+		(r) => r.length > 1
+	);
+	expect(rows[0][0]).toBe('position');
+	expect(rows).toHaveLength(entries.length + 1);
+
+	// RFC 8216 §4.3.2.1: one #EXTINF per dance with a track, each followed by its audio URL.
+	const m3u = await (await organiser.get(`/api/evenings/${EVENING}/export.m3u8`)).text();
+	const lines = m3u.split('\n');
+	expect(lines[0]).toBe('#EXTM3U');
+	const dances = entries.filter((e) => e.kind === 'dance' && e.trackId);
+	expect(lines.filter((l) => /^#EXTINF:\d+,/.test(l))).toHaveLength(dances.length);
+	expect(lines).toContain(`${BASE}/api/tracks/${dances[0].trackId}/audio`);
+
+	// ical.js reading RFC 5545: the UID and the evening's start, with the public page's URL.
+	const ics = await (await organiser.get(`/api/evenings/${EVENING}/export.ics`)).text();
+	const event = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
+	expect(event.getFirstPropertyValue('summary')).toBe('Lantern Night Social');
+	expect(String(event.getFirstPropertyValue('url'))).toMatch(/\/e\/[A-Za-z0-9_-]{16,}$/);
+
+	const pdf = await organiser.get(`/api/evenings/${EVENING}/export.pdf`);
+	expect(pdf.headers()['content-type']).toBe('application/pdf');
+	expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+});
+
+test('a dancer may export a published evening but not a draft', async () => {
+	const dancer = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(dancer, 'dancer');
+	expect((await dancer.get(`/api/evenings/${EVENING}/export.csv`)).status()).toBe(200);
+	expect((await dancer.get('/api/evenings/2/export.csv')).status()).toBe(404);
+	expect((await dancer.post(`/api/evenings/${EVENING}/publish`, { headers })).status()).toBe(403);
+	await dancer.dispose();
+});
+
+test('unpublish and publish again: the old link answers 404, the new one works', async () => {
+	const first = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
+	expect(first.status()).toBe(200);
+	const { shareUrl: oldUrl } = await first.json();
+	// The seed's token (16 bytes) or ours (18 bytes): base64url either way.
+	expect(oldUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{22,24}$`));
+	// Publishing an evening that is already published keeps its link.
+	const again = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
+	expect((await again.json()).shareUrl).toBe(oldUrl);
+	expect((await anon.get(oldUrl)).status()).toBe(200);
+
+	const off = await organiser.delete(`/api/evenings/${EVENING}/publish`, { headers });
+	expect(off.status()).toBe(200);
+	expect((await anon.get(oldUrl)).status()).toBe(404);
+	expect((await anon.get(`${oldUrl}/poster`)).status()).toBe(404);
+	const evening = await (await organiser.get(`/api/evenings/${EVENING}`)).json();
+	expect(evening).toMatchObject({ status: 'draft', shareToken: null });
+
+	const on = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
+	const { shareUrl } = await on.json();
+	expect(shareUrl).not.toBe(oldUrl);
+	// 18 random bytes are 24 base64url characters (RFC 4648 §5).
+	expect(shareUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{24}$`));
+	expect((await anon.get(shareUrl)).status()).toBe(200);
+	expect((await anon.get(oldUrl)).status()).toBe(404);
+});
+
+test('the public page, signed out: QR code, run order, nothing private; a request reaches the team', async ({
+	page
+}) => {
+	const { shareUrl } = await (
+		await organiser.post(`/api/evenings/${EVENING}/publish`, { headers })
+	).json();
+	await page.goto(shareUrl);
+	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
+	await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+	const qr = page.getByRole('img', { name: /QR code/ });
+	await expect(qr).toBeVisible();
+	expect(await qr.getAttribute('src')).toMatch(/^data:image\/svg\+xml;base64,/);
+	await expect(page.getByRole('heading', { name: 'Run order' })).toBeVisible();
+	// The lesson's teacher by first name only; no addresses, surnames, notes or requesters.
+	const html = await page.content();
+	expect(html).toContain('Dolores');
+	// Full names: "Wrenfield" alone is also an invented dance's name.
+	const secrets = ['@floorset.test', 'Dolores Fenwright', 'Tobias Wrenfield', 'Sam Quillon'];
+	for (const secret of [...secrets, 'Mince pies', 'My favourite!']) {
+		expect(html.includes(secret), `the page shows "${secret}"`).toBe(false);
+	}
+
+	await page
+		.getByLabel('Dance', { exact: true })
+		.selectOption({ label: 'Saltmarsh Swing (Improver)' });
+	await page.getByLabel('A note for the DJ (optional)').fill('After the tea break, please (e2e)');
+	await page.getByLabel('Your first name (optional)').fill('Robin');
+	await page.getByRole('button', { name: 'Send my request' }).click();
+	await expect(page.getByRole('status')).toHaveText(/Your request is with the DJ/);
+
+	// The poster prints the same QR code large.
+	await page.goto(`${shareUrl}/poster`);
+	await expect(page.getByRole('img', { name: /QR code/ })).toBeVisible();
+	await page.emulateMedia({ media: 'print' });
+	await expect(page.getByRole('button', { name: 'Print this poster' })).toBeHidden();
+	await expect(page.getByRole('link', { name: 'Sign in' })).toBeHidden();
+	await page.emulateMedia({ media: 'screen' });
+
+	// The organiser and the DJ read it on the requests page.
+	for (const role of ['organiser', 'dj'] as const) {
+		const ctx = await page.context().browser()!.newContext({ baseURL: BASE });
+		const teamPage = await ctx.newPage();
+		await signIn(teamPage, role);
+		await teamPage.goto('/requests');
+		await expect(teamPage.getByText('After the tea break, please (e2e)')).toBeVisible();
+		await ctx.close();
+	}
+});
+
+test('the request form is validated, trapped against bots and rate-limited', async ({ page }) => {
+	const { shareUrl } = await (
+		await organiser.post(`/api/evenings/${EVENING}/publish`, { headers })
+	).json();
+	const send = (form: Record<string, string>) =>
+		anon.post(`${shareUrl}?/request`, {
+			form,
+			headers: { origin: BASE, accept: 'application/json', 'x-sveltekit-action': 'true' }
+		});
+	const outcome = async (form: Record<string, string>) =>
+		(await (await send(form)).json()) as {
+			type: string;
+			status: number;
+		};
+	// No dance named: refused with 422 (validation happens before the limit counts).
+	expect(await outcome({ danceId: '', danceName: '', message: '' })).toMatchObject({
+		type: 'failure',
+		status: 422
+	});
+	expect(await outcome({ danceId: '', danceName: 'x'.repeat(81), message: '' })).toMatchObject({
+		status: 422
+	});
+	// The trap field filled in: a cheerful answer, nothing stored.
+	expect(
+		await outcome({ danceName: 'Bot Polka', website: 'http://spam.example', message: 'bot-e2e' })
+	).toMatchObject({ type: 'success' });
+	// Five per ten minutes per address and evening (the page's earlier request counted one).
+	const results: number[] = [];
+	for (let i = 0; i < 5; i++) {
+		const r = await outcome({ danceName: `Invented Reel ${i}`, message: '' });
+		results.push(r.type === 'success' ? 200 : r.status);
+	}
+	expect(results).toEqual([200, 200, 200, 200, 429]);
+	// The bot's request was never stored; the dancers' were.
+	await signIn(page, 'dj');
+	await page.goto('/requests');
+	await expect(page.getByText('Invented Reel 3')).toBeVisible();
+	await expect(page.getByText('bot-e2e')).toHaveCount(0);
+	await expect(page.getByText('Invented Reel 4')).toHaveCount(0);
+});
+
+test('the organiser e-mails the run order; it lands in the outbox with CSV and PDF', async ({
+	browser
+}) => {
+	const refused = await organiser.post(`/api/evenings/${EVENING}/email`, {
+		data: { roles: [] },
+		headers
+	});
+	expect(refused.status()).toBe(422);
+	const res = await organiser.post(`/api/evenings/${EVENING}/email`, {
+		data: { roles: ['dj', 'instructor'], message: 'Doors at half six (e2e).' },
+		headers
+	});
+	expect(res.status()).toBe(200);
+	expect(await res.json()).toEqual({ sent: 2 });
+
+	const ctx = await browser.newContext({ baseURL: BASE });
+	const admin = await ctx.newPage();
+	await signIn(admin, 'admin');
+	await admin.goto('/admin/outbox');
+	const message = admin
+		.getByTestId('outbox-message')
+		.filter({ hasText: 'Run order: Lantern Night Social' })
+		.filter({ hasText: 'dj@floorset.test' });
+	await expect(message).toHaveCount(1);
+	await expect(message).toContainText('2 attachment(s)');
+	await message.locator('summary').click();
+	await expect(message).toContainText('Doors at half six (e2e).');
+	await expect(message.getByRole('list', { name: 'Attachments' })).toContainText(
+		`evening-${EVENING}.csv`
+	);
+	await expect(message.getByRole('list', { name: 'Attachments' })).toContainText(
+		`evening-${EVENING}.pdf`
+	);
+	await ctx.close();
+});
+
+test('the print view shows the run sheet and hides the navigation in print', async ({ page }) => {
+	await signIn(page, 'organiser');
+	await page.goto(`/evenings/${EVENING}/print`);
+	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
+	await expect(page.getByRole('table')).toBeVisible();
+	await expect(page.getByText('100 dB LAeq over any 15 minutes')).toBeVisible();
+	await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
+	await page.emulateMedia({ media: 'print' });
+	await expect(page.getByRole('navigation', { name: 'Main' })).toBeHidden();
+	await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
+});
