@@ -1,0 +1,158 @@
+// Dance catalogue and fit, end to end in Chromium: an instructor adds a dance, the DJ confirms a
+// suggested track, the instructor previews slowed lesson music, a dancer cannot edit, and a CSV
+// import with a bad row writes nothing. Names are invented.
+import { expect, request as newRequest, test } from '@playwright/test';
+import { BASE, signIn, signInApi } from './helpers';
+
+test.describe.configure({ mode: 'serial' });
+
+let danceId = 0;
+const NAME = 'Thornbury Amble';
+
+test('an instructor creates a dance with a tag', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto('/dances/new');
+	await page.getByLabel('Name', { exact: true }).fill(NAME);
+	await page.getByLabel('Counts', { exact: true }).fill('32');
+	await page.getByRole('radio', { name: '4', exact: true }).check();
+	await page.getByLabel('Level').selectOption('beginner');
+	await page.getByLabel('Rhythm').selectOption('shuffle');
+	// The rhythm's usual range fills in; this dance's own range replaces it.
+	await expect(page.getByLabel('Slowest')).toHaveValue('90');
+	await page.getByLabel('Slowest').fill('110');
+	await page.getByLabel('Fastest').fill('128');
+	await page.getByRole('button', { name: 'Add a tag' }).click();
+	await page.getByLabel('Repetition', { exact: true }).fill('3');
+	await page.getByLabel('After count').fill('32');
+	await page.getByLabel('Length (counts)').fill('4');
+	await page.getByRole('button', { name: 'Add to the catalogue' }).click();
+	await expect(page.getByRole('heading', { level: 1, name: NAME })).toBeVisible();
+	await expect(page.getByText('Tag of 4 counts after count 32 of repetition 3')).toBeVisible();
+	danceId = Number(/\/dances\/(\d+)/.exec(page.url())?.[1]);
+	expect(danceId).toBeGreaterThan(0);
+});
+
+test('the form refuses a range whose slowest is above its fastest', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto('/dances/new');
+	await page.getByLabel('Name', { exact: true }).fill('Backwards Range');
+	await page.getByLabel('Slowest').fill('130');
+	await page.getByLabel('Fastest').fill('120');
+	await page.getByRole('button', { name: 'Add to the catalogue' }).click();
+	await expect(page.getByText('The fastest tempo must be above the slowest.')).toBeVisible();
+	await expect(page).toHaveURL(/\/dances\/new/);
+});
+
+test('the DJ confirms a suggested track from the dance page', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto(`/dances/${danceId}`);
+	const first = page.getByTestId('fit-row').first();
+	await expect(first.getByTestId('verdict')).toHaveAttribute('data-verdict', '');
+	await expect(first.getByTestId('drift')).toBeVisible();
+	await expect(first.getByTestId('end-wall')).toBeVisible();
+	const trackId = Number(await first.getAttribute('data-track-id'));
+	await first.getByRole('button', { name: /^Fits/ }).click();
+	const row = page.locator(`[data-testid="fit-row"][data-track-id="${trackId}"]`);
+	await expect(row.getByTestId('verdict')).toHaveAttribute('data-verdict', /^fits/);
+
+	// The API agrees: the confirmed track leads, with the DJ's verdict.
+	const res = await page.request.get(`/api/dances/${danceId}/fits?limit=3`);
+	const body = await res.json();
+	expect(body.items[0].track.id).toBe(trackId);
+	expect(body.items[0].verdict).toMatch(/^fits/);
+	expect(body.items[0].phrasing).toHaveProperty('endWall');
+});
+
+test('the instructor previews a slowed track for a beginners’ lesson', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto(`/dances/${danceId}?level=beginner#lesson`);
+	// 15 % below 110 BPM (the fit engine's beginner slow-down, common teaching practice).
+	await expect(page.getByTestId('lesson-target')).toContainText('93.5 BPM');
+	await expect(page.getByTestId('pacing-caution')).toBeVisible();
+	// Some fitting tracks are refused with the reason (past the 0.80× bound) …
+	await expect(page.locator('[data-testid="slowed"][data-ok="false"]').first()).toContainText(
+		'Refused'
+	);
+	// … and a fitting track within it previews at the rate that reaches the target.
+	const button = page.locator('[data-testid="slowed"][data-ok="true"] button').first();
+	const rate = Number(await button.getAttribute('data-rate'));
+	expect(rate).toBeGreaterThanOrEqual(0.8);
+	expect(rate).toBeLessThan(1);
+	await button.click();
+	await expect(page.getByTestId('now-previewing')).toContainText(`${rate.toFixed(2)}×`);
+	const audio = await page.getByTestId('preview-audio').evaluate((el: HTMLAudioElement) => ({
+		rate: el.playbackRate,
+		pitch: el.preservesPitch,
+		src: el.getAttribute('src')
+	}));
+	expect(audio.rate).toBeCloseTo(rate, 3);
+	expect(audio.pitch).toBe(true);
+	expect(audio.src).toMatch(/^\/api\/tracks\/\d+\/audio$/);
+
+	// A standing request for slower music reaches the DJ's list.
+	await page.getByLabel('Message (optional)').fill('Nearer 90 for the taster night, please.');
+	await page.getByRole('button', { name: 'Send the request' }).click();
+	await expect(page.getByText('Sent: the DJ sees it under Requests.')).toBeVisible();
+});
+
+test('the DJ sees the request and marks it done', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto('/requests');
+	const item = page
+		.getByTestId('request')
+		.filter({ hasText: 'Nearer 90 for the taster night, please.' });
+	await expect(item).toContainText(`Slower music for ${NAME}`);
+	await item.getByRole('button', { name: 'Mark done' }).click();
+	await expect(item.getByTestId('request-status')).toHaveText('Done');
+});
+
+test('a dancer can read dances but not edit them', async ({ page }) => {
+	await signIn(page, 'dancer');
+	const view = await page.goto(`/dances/${danceId}`);
+	expect(view?.status()).toBe(200);
+	await expect(page.getByRole('link', { name: 'Edit' })).toHaveCount(0);
+	const edit = await page.goto(`/dances/${danceId}/edit`);
+	expect(edit?.status()).toBe(403);
+	const create = await page.goto('/dances/new');
+	expect(create?.status()).toBe(403);
+
+	const api = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(api, 'dancer');
+	const post = await api.post('/api/dances', {
+		data: {
+			name: 'Not Allowed',
+			counts: 32,
+			walls: 4,
+			level: 'beginner',
+			bpmMin: 100,
+			bpmMax: 120
+		},
+		headers: { origin: BASE }
+	});
+	expect(post.status()).toBe(403);
+	expect((await post.json()).error).toBeTruthy();
+	await api.dispose();
+});
+
+test('a CSV import with a bad row shows the row’s error and writes nothing', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto('/dances/import');
+	await page
+		.getByLabel('…or paste the text')
+		.fill(
+			[
+				'name,counts,walls,level,bpmMin,bpmMax',
+				'Fernhollow Drift,32,4,beginner,100,120',
+				'Crooked Walls,32,3,improver,100,120'
+			].join('\n')
+		);
+	await page.getByRole('button', { name: 'Check and preview' }).click();
+	await expect(page.getByTestId('import-summary')).toContainText('1 with problems');
+	const bad = page.locator('[data-testid="import-row"][data-ok="false"]');
+	await expect(bad).toHaveCount(1);
+	await expect(bad).toContainText('walls');
+	await expect(page.getByRole('button', { name: /^Import \d+ dances/ })).toHaveCount(0);
+
+	const list = await page.request.get('/api/dances?q=Fernhollow');
+	expect((await list.json()).items).toEqual([]);
+});
