@@ -16,7 +16,7 @@ export interface AnnealResult {
 	stoppedBy: 'iterations' | 'time';
 }
 
-const T_START = 2;
+const T_START = 1;
 const T_END = 0.02;
 const SAMPLE = 24;
 

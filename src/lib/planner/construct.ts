@@ -58,7 +58,8 @@ function walkFixed(problem: Problem, st: State, slot: Slot, lastEnd: number): nu
 		if (it.kind === 'dance' && it.cand && it.cand.dance >= 0) {
 			if (it.lesson) {
 				if (it.cand.track >= 0) st.used.add(it.cand.track);
-				st.w.prevRh = '';
+				st.w.prev2Rh = '';
+				st.w.prevRh = problem.dances[it.cand.dance].rhythm;
 			} else record(problem, st, it.cand, t);
 		}
 		t += it.dur;
@@ -106,8 +107,8 @@ function globalGain(
 		const l = problem.lessons[li];
 		if (start < l.endS || st.reprised.has(l.dance)) continue;
 		if (Math.abs(c.rate - 1) > problem.settings.fullTempoTolerance) continue;
-		const urgent = start - l.endS >= 900 || lastDance;
-		cost += (urgent ? -HARD / 2 : 0) + wt.reprise * repriseCost([start - l.endS]);
+		// The first full-tempo play after the lesson settles a hard rule: take it when it comes.
+		cost += -HARD / 2 + wt.reprise * repriseCost([start - l.endS]);
 	}
 	if (lastDance) {
 		const d = problem.dances[c.dance];
@@ -245,7 +246,7 @@ export function construct(problem: Problem, locks: LockedEntry[]): Plan {
 	const lockedPlays: State['lockedPlays'] = [];
 	for (const s of plan) {
 		for (const it of s.items) {
-			if (it.locked && it.kind === 'dance' && it.cand && it.cand.dance >= 0) {
+			if (it.locked && !it.lesson && it.kind === 'dance' && it.cand && it.cand.dance >= 0) {
 				lockedPlays.push({ dance: it.cand.dance, start: s.start });
 			}
 		}

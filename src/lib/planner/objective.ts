@@ -274,8 +274,9 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 					}
 					advanceDance(problem, w, c);
 				} else {
-					w.prevRh = '';
+					// The lesson's play counts for rhythm: a waltz lesson is not followed by a waltz.
 					w.prev2Rh = '';
+					w.prevRh = problem.dances[c.dance].rhythm;
 				}
 				if (c.track >= 0) {
 					if (sc.trackStamp[c.track] !== gen) {

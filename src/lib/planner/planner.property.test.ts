@@ -62,6 +62,29 @@ function assertSound(input: PlanInput, plan: PlanResult): RunOrderProblem[] {
 	expect(rulesOf(problems).filter((r) => ALWAYS.includes(r))).toEqual([]);
 	// Anything else the independent check finds, the planner must have owned up to.
 	if (problems.length > 0) expect(plan.violations.length).toBeGreaterThan(0);
+	// Preferences it misses are owned up to as well: requests, must-plays, waltz pairs.
+	const dances = new Map(input.dances.map((d) => [d.id, d]));
+	const plays = plan.entries.filter((e) => e.kind === 'dance' && e.danceId !== null);
+	for (const r of input.requests ?? []) {
+		const name = dances.get(r.danceId)!.name;
+		if (!plays.some((e) => e.danceId === r.danceId)) {
+			expect(plan.unmet.some((u) => u.includes(name))).toBe(true);
+		}
+	}
+	for (const m of input.mustPlay ?? []) {
+		const id = typeof m === 'object' ? m.danceId : m;
+		if (!plays.some((e) => e.danceId === id)) {
+			expect(plan.unmet.some((u) => u.includes(dances.get(id)!.name))).toBe(true);
+		}
+	}
+	plan.entries.forEach((e, i) => {
+		const prev = plan.entries[i - 1];
+		const waltz = (x: PlanResult['entries'][number] | undefined) =>
+			x?.kind === 'dance' && x.danceId !== null && dances.get(x.danceId)?.rhythm === 'waltz';
+		if (waltz(e) && waltz(prev) && !e.locked && !prev.locked) {
+			expect(plan.unmet).toContain(`Two waltzes back to back at entry ${i + 1}.`);
+		}
+	});
 	return problems;
 }
 

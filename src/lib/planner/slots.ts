@@ -90,10 +90,12 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 	}));
 	let cursor = 0;
 	let li = 0;
+	let lastLockEnd = 0;
 	secs.forEach((sec, si) => {
 		const nextSec = si + 1 < secs.length ? secs[si + 1].startS : problem.eveningS;
+		// What the section follows: its own start, or a lock from before that runs into it.
+		let before = cursor > sec.startS ? lastLockEnd : sec.startS;
 		cursor = Math.max(cursor, sec.startS);
-		let before = cursor;
 		const kind = sec.kind === 'lesson' || sec.kind === 'break' ? 'fixed' : 'dance';
 		for (;;) {
 			const lock = li < lockSlots.length ? lockSlots[li] : null;
@@ -116,6 +118,7 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 				slots.push(lock);
 				cursor = Math.max(cursor, lock.target + gapS);
 				before = Math.max(before, lock.target);
+				lastLockEnd = Math.max(lastLockEnd, lock.target);
 				li++;
 				continue;
 			}

@@ -70,9 +70,13 @@ export function unmetPreferences(problem: Problem, plan: Plan): string[] {
 	let prevRh = '';
 	placed.forEach((p, idx) => {
 		const c = p.item.cand;
-		if (p.item.kind === 'break' || !c || c.dance < 0 || p.item.lesson) {
-			if (p.item.kind === 'break') fastRun = 0;
-			if (p.item.kind === 'break' || p.item.lesson) prevRh = '';
+		if (p.item.kind === 'break') {
+			fastRun = 0;
+			prevRh = '';
+		}
+		if (!c || c.dance < 0) return;
+		if (p.item.lesson) {
+			prevRh = problem.dances[c.dance].rhythm;
 			return;
 		}
 		const d = problem.dances[c.dance];
