@@ -1,7 +1,7 @@
 import { parseBuffer } from 'music-metadata';
 import { describe, expect, it } from 'vitest';
 import { WaveFile } from 'wavefile';
-import { writeId3 } from './id3.node';
+import { writeId3 } from './id3.server';
 import { encodeMp3 } from './mp3';
 import { generateSong } from './song';
 import { encodeWav } from './wav';

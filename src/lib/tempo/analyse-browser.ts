@@ -123,6 +123,11 @@ async function readTags(file: Blob): Promise<IAudioMetadata> {
 	}
 	if (!meta.format.container && !meta.format.codec)
 		throw new Error('Not an audio file: no audio stream was found in it.');
+	// music-metadata notes a data chunk longer than the file (a WAV cut short). Its other
+	// message, "Data chunk size exceeds file size", also appears on whole files (11.16.1
+	// compares after subtracting the chunk), so only this one counts.
+	if (meta.quality.warnings.some((w) => /length exceeding file length|truncat/i.test(w.message)))
+		throw new Error('The file is truncated or damaged: it ends before its audio does.');
 	return meta;
 }
 
@@ -179,6 +184,8 @@ async function decodeExcerpt(
 		throw new Error('The file is truncated or damaged: its audio could not be decoded.');
 	}
 	let pcm = mono(buffer);
+	if (bytes === whole && durationS > 0 && buffer.duration < durationS * 0.9 - 1)
+		throw new Error('The file is truncated or damaged: it holds less audio than it says.');
 	if (long && !sliced) {
 		// A whole file or an MP3 head: the excerpt is cut from the decoded samples.
 		pcm = pcm.subarray(Math.round(startS * rate), Math.round((startS + excerptS) * rate));

@@ -1,7 +1,7 @@
 import { parseBuffer } from 'music-metadata';
 import { describe, expect, it } from 'vitest';
 import { WaveFile } from 'wavefile';
-import { writeId3 } from '../synth/id3.node';
+import { writeId3 } from '../synth/id3.server';
 import { encodeMp3 } from '../synth/mp3';
 import { generateSong } from '../synth/song';
 import { encodeWav } from '../synth/wav';
