@@ -1,20 +1,31 @@
 // The run sheet as a PDF, made on the server with pdfkit in the app's own shipped font (Atkinson
-// Hyperlegible from @fontsource; pdfkit reads its WOFF files through fontkit). Large type: the
+// Hyperlegible from @fontsource, unpacked from WOFF). Large type: the
 // sheet is read at arm's length in a dim hall. It draws the same view as the print page.
 import PDFDocument from 'pdfkit';
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { RunSheet } from './sheet';
 import { sheetView } from './sheet-view';
+import { woffToSfnt } from './woff';
 
 type View = ReturnType<typeof sheetView>;
 type Row = View['entries'][number];
 type Doc = InstanceType<typeof PDFDocument>;
 
 const require = createRequire(import.meta.url);
-const fontFile = (weight: 400 | 700) =>
-	require.resolve(
-		`@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-${weight}-normal.woff`
-	);
+const fonts = new Map<400 | 700, Buffer>();
+/** The shipped font, unpacked from WOFF once per process (see woff.ts for why). */
+function font(weight: 400 | 700): Buffer {
+	let bytes = fonts.get(weight);
+	if (!bytes) {
+		const file = require.resolve(
+			`@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-${weight}-normal.woff`
+		);
+		bytes = woffToSfnt(readFileSync(file));
+		fonts.set(weight, bytes);
+	}
+	return bytes;
+}
 
 const MARGIN = 48;
 const INK = '#2e2119';
@@ -40,7 +51,11 @@ function entryRow(doc: Doc, e: Row) {
 	const subHeight = sub
 		? doc.font('body').fontSize(11).heightOfString(sub, { width: WHAT_WIDTH })
 		: 0;
-	const height = titleHeight + subHeight + 6;
+	const tempoHeight = doc
+		.font('body')
+		.fontSize(13)
+		.heightOfString(e.tempo || ' ', { width: COL.length - COL.tempo - 6 });
+	const height = Math.max(titleHeight + subHeight, tempoHeight) + 6;
 	if (doc.y + height > doc.page.height - MARGIN - 24) {
 		doc.addPage();
 		tableHead(doc);
@@ -101,8 +116,8 @@ export function buildPdf(sheet: RunSheet): Promise<Buffer> {
 		bufferPages: true,
 		info: { Title: `Run sheet: ${v.title}`, Creator: 'Floorset' }
 	});
-	doc.registerFont('body', fontFile(400));
-	doc.registerFont('bold', fontFile(700));
+	doc.registerFont('body', font(400));
+	doc.registerFont('bold', font(700));
 	const done = new Promise<Buffer>((resolve, reject) => {
 		const chunks: Buffer[] = [];
 		doc.on('data', (c: Buffer) => chunks.push(c));

@@ -96,13 +96,21 @@ export function entryTitle(e: SheetEntry): string {
 export const trackLine = (e: SheetEntry) =>
 	e.trackTitle ? (e.artist ? `${e.trackTitle} · ${e.artist}` : e.trackTitle) : '';
 
-const clock = (timeZone: string) =>
-	new Intl.DateTimeFormat('en-GB', {
-		timeZone,
-		hour: '2-digit',
-		minute: '2-digit',
-		hourCycle: 'h23'
-	});
+// Building an Intl formatter costs far more than using one: keep one per zone (a pure memo).
+const clocks = new Map<string, Intl.DateTimeFormat>();
+function clock(timeZone: string) {
+	let f = clocks.get(timeZone);
+	if (!f) {
+		f = new Intl.DateTimeFormat('en-GB', {
+			timeZone,
+			hour: '2-digit',
+			minute: '2-digit',
+			hourCycle: 'h23'
+		});
+		clocks.set(timeZone, f);
+	}
+	return f;
+}
 
 /** Wall-clock HH:MM in the sheet's zone. */
 export const wallTime = (ms: number, timeZone: string) => clock(timeZone).format(new Date(ms));
