@@ -38,7 +38,7 @@ function wav(bpm: number, seed: number) {
 
 async function upload(instance: Instance, cookie: string, bytes: Uint8Array, name: string) {
 	const form = new FormData();
-	form.set('file', new Blob([bytes], { type: 'audio/wav' }), name);
+	form.set('file', new Blob([bytes as BlobPart], { type: 'audio/wav' }), name);
 	form.set('analysis', JSON.stringify({ bpm: 120, source: 'detected', meter: 4 }));
 	try {
 		const res = await fetch(`${instance.base}/api/tracks`, {

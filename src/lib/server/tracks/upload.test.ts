@@ -2,7 +2,7 @@
 // refused, and that a refusal or a failure leaves no row and no file behind.
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { parseBuffer } from 'music-metadata';
-import { writeId3 } from '../../synth/id3.node';
+import { writeId3 } from '../../synth/id3-node';
 import { resetConfig } from '../config';
 import { tracks } from '../db/schema';
 import type { Storage } from '../storage';
