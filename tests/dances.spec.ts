@@ -106,6 +106,66 @@ test('the DJ sees the request and marks it done', async ({ page }) => {
 	await expect(item.getByTestId('request-status')).toHaveText('Done');
 });
 
+test('a step sheet must be a PDF by its bytes, and is served as one', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto(`/dances/${danceId}/edit`);
+	// A text file dressed up as a PDF is refused.
+	await page.getByLabel(/^Step sheet/).setInputFiles({
+		name: 'steps.pdf',
+		mimeType: 'application/pdf',
+		buffer: Buffer.from('not really a pdf')
+	});
+	await page.getByRole('button', { name: 'Save changes' }).click();
+	await expect(page.getByText('A step sheet must be a PDF file.')).toBeVisible();
+	await page.goto(`/dances/${danceId}/edit`);
+	await page.getByLabel(/^Step sheet/).setInputFiles({
+		name: 'Thornbury steps.pdf',
+		mimeType: 'application/pdf',
+		buffer: Buffer.from('%PDF-1.4\n% invented step sheet\n%%EOF\n')
+	});
+	await page.getByRole('button', { name: 'Save changes' }).click();
+	await expect(page.getByRole('heading', { level: 1, name: NAME })).toBeVisible();
+	const link = page.getByRole('link', { name: 'Step sheet (PDF)' });
+	const res = await page.request.get((await link.getAttribute('href'))!);
+	expect(res.status()).toBe(200);
+	expect(res.headers()['content-type']).toBe('application/pdf');
+	expect(res.headers()['content-disposition']).toContain('Thornbury steps.pdf');
+	expect((await res.body()).subarray(0, 5).toString()).toBe('%PDF-');
+});
+
+test('the API refuses a stale edit with 409', async ({ page }) => {
+	await signIn(page, 'instructor');
+	const current = await (await page.request.get(`/api/dances/${danceId}`)).json();
+	const ok = await page.request.patch(`/api/dances/${danceId}`, {
+		data: { version: current.version, notes: 'Walk it through twice first.' },
+		headers: { origin: BASE }
+	});
+	expect(ok.status()).toBe(200);
+	expect((await ok.json()).version).toBe(current.version + 1);
+	const stale = await page.request.patch(`/api/dances/${danceId}`, {
+		data: { version: current.version, notes: 'An edit made on an old copy.' },
+		headers: { origin: BASE }
+	});
+	expect(stale.status()).toBe(409);
+	expect((await stale.json()).error).toMatch(/changed/);
+});
+
+test('the DJ judges dances from a track’s own list', async ({ page }) => {
+	await signIn(page, 'dj');
+	const fits = await (await page.request.get(`/api/dances/${danceId}/fits?limit=5`)).json();
+	const trackId = fits.items[1].track.id;
+	await page.goto(`/music/${trackId}`);
+	const mine = page.locator(`[data-testid="track-fit"][data-dance-id="${danceId}"]`);
+	await expect(mine).toBeVisible();
+	await mine.getByRole('button', { name: /^Does not fit/ }).click();
+	await expect(mine.getByTestId('verdict')).toHaveAttribute('data-verdict', 'does-not-fit');
+	const after = await (await page.request.get(`/api/tracks/${trackId}/fits?limit=100`)).json();
+	const item = after.items.find((i: { dance: { id: number } }) => i.dance.id === danceId);
+	expect(item.verdict).toBe('does-not-fit');
+	// A rejected pairing ranks last from the track's side too.
+	expect(after.items.at(-1).dance.id).toBe(danceId);
+});
+
 test('a dancer can read dances but not edit them', async ({ page }) => {
 	await signIn(page, 'dancer');
 	const view = await page.goto(`/dances/${danceId}`);
