@@ -123,21 +123,18 @@ async function saves(connections: number, cookie: string) {
 		'content-type': 'application/json',
 		accept: 'application/json'
 	};
-	const url = `${BASE}/api/evenings/${evening.id}/run-order`;
 	const latencies: number[] = [];
 	let accepted = 0;
 	let conflicts = 0;
 	let errors = 0;
 	let lastAccepted: unknown = null;
-	const start = await (await fetch(`${BASE}/api/evenings/${evening.id}`, { headers })).json();
+	const start = await (await fetch(url, { headers })).json();
 	const startVersion: number = start.runOrderVersion;
 	const until = Date.now() + SECONDS * 1000;
 	await Promise.all(
 		Array.from({ length: connections }, async (_, worker) => {
 			while (Date.now() < until) {
-				const current = await (
-					await fetch(`${BASE}/api/evenings/${evening.id}`, { headers })
-				).json();
+				const current = await (await fetch(url, { headers })).json();
 				const entries = [...current.entries].map((e: Record<string, unknown>) => ({ ...e }));
 				// A visible change per save: toggle a lock on the worker's entry.
 				if (entries.length) {
@@ -160,7 +157,7 @@ async function saves(connections: number, cookie: string) {
 			}
 		})
 	);
-	const end = await (await fetch(`${BASE}/api/evenings/${evening.id}`, { headers })).json();
+	const end = await (await fetch(url, { headers })).json();
 	const lost = startVersion + accepted - end.runOrderVersion;
 	const sameAsLast =
 		JSON.stringify(end.entries.map((e: { locked: boolean }) => e.locked)) ===
