@@ -4,7 +4,7 @@ import type { EntryKind } from '../../domain';
 
 export interface TimedEntry {
 	kind: EntryKind;
-	sectionId: number | null | undefined;
+	sectionId?: number | null;
 	durationS: number;
 	locked?: boolean;
 	/** A locked entry's start: it stays there unless the entries before it run past it. */
