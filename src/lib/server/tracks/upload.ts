@@ -37,7 +37,9 @@ export const tooLarge = (): UploadResult => ({
 	error: `The file is larger than the ${config().MAX_UPLOAD_MB} MB limit.`
 });
 
-function readAnalysis(text: string | null): { ok: true; data: Analysis } | UploadResult {
+type Refusal = Extract<UploadResult, { ok: false }>;
+
+function readAnalysis(text: string | null): { ok: true; data: Analysis } | Refusal {
 	if (text === null || text.trim() === '') {
 		return { ok: false, status: 400, error: 'The analysis is missing: send it as JSON.' };
 	}

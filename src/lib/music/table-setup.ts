@@ -1,0 +1,163 @@
+// The music table's features and columns (TanStack Table v9: features and row models are
+// registered explicitly, so only what the table uses is bundled). Kept outside the component
+// so they are created once, as the adapter's documentation advises.
+import {
+	columnFilteringFeature,
+	columnVisibilityFeature,
+	createFilteredRowModel,
+	createSortedRowModel,
+	filterFn_equals,
+	filterFn_includesString,
+	filterFn_inNumberRange,
+	globalFilteringFeature,
+	rowSelectionFeature,
+	rowSortingFeature,
+	sortFn_alphanumeric,
+	sortFn_basic,
+	sortFn_text,
+	tableFeatures,
+	type ColumnDef
+} from '@tanstack/svelte-table';
+import type { TrackJson } from './track-types';
+
+/** Width of each column in the CSS grid, carried on the column's meta. */
+export interface ColumnMetaInfo {
+	size: string;
+	numeric?: boolean;
+}
+
+export const features = tableFeatures({
+	rowSortingFeature,
+	columnFilteringFeature,
+	globalFilteringFeature,
+	columnVisibilityFeature,
+	rowSelectionFeature,
+	sortedRowModel: createSortedRowModel(),
+	filteredRowModel: createFilteredRowModel(),
+	sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, text: sortFn_text },
+	filterFns: {
+		includesString: filterFn_includesString,
+		inNumberRange: filterFn_inNumberRange,
+		equals: filterFn_equals
+	},
+	columnMeta: {} as ColumnMetaInfo
+});
+
+export type Features = typeof features;
+type Col = ColumnDef<Features, TrackJson>;
+
+export const minutes = (s: number) =>
+	`${Math.floor(s / 60)}:${String(Math.round(s % 60)).padStart(2, '0')}`;
+
+const text = (key: 'title' | 'artist' | 'album', header: string, size: string): Col => ({
+	id: key,
+	accessorFn: (t) => t[key],
+	header,
+	sortFn: 'text',
+	filterFn: 'includesString',
+	meta: { size }
+});
+
+const number = (
+	id: string,
+	header: string,
+	get: (t: TrackJson) => number | undefined,
+	size: string,
+	format: (t: TrackJson) => string
+): Col => ({
+	id,
+	accessorFn: get,
+	header,
+	sortFn: 'basic',
+	sortUndefined: 'last',
+	enableGlobalFilter: false,
+	cell: (c) => format(c.row.original),
+	meta: { size, numeric: true }
+});
+
+export const columns: Col[] = [
+	{
+		id: 'select',
+		header: 'Select',
+		enableSorting: false,
+		enableGlobalFilter: false,
+		enableHiding: false,
+		meta: { size: '3rem' }
+	},
+	text('title', 'Title', 'minmax(12rem, 2fr)'),
+	text('artist', 'Artist', 'minmax(9rem, 1.3fr)'),
+	text('album', 'Album', 'minmax(8rem, 1fr)'),
+	{
+		...number(
+			'bpm',
+			'Tempo',
+			(t) => t.bpm ?? undefined,
+			'13rem',
+			(t) => String(t.bpm ?? '—')
+		),
+		filterFn: 'inNumberRange'
+	},
+	{
+		...number(
+			'meter',
+			'Meter',
+			(t) => t.meter,
+			'5rem',
+			(t) => `${t.meter}/4`
+		),
+		filterFn: 'equals'
+	},
+	number(
+		'phraseBeats',
+		'Phrase',
+		(t) => t.phraseBeats,
+		'5.5rem',
+		(t) => `${t.phraseBeats}`
+	),
+	number(
+		'introBeats',
+		'Intro',
+		(t) => t.introBeats,
+		'5rem',
+		(t) => `${t.introBeats}`
+	),
+	number(
+		'durationS',
+		'Length',
+		(t) => t.durationS,
+		'5.5rem',
+		(t) => minutes(t.durationS)
+	),
+	number(
+		'confidence',
+		'Confidence',
+		(t) => t.confidence ?? undefined,
+		'7rem',
+		(t) => (t.confidence === null ? '—' : `${Math.round(t.confidence * 100)} %`)
+	),
+	{
+		id: 'bpmSource',
+		accessorFn: (t) => t.bpmSource,
+		header: 'Tempo from',
+		sortFn: 'text',
+		enableGlobalFilter: false,
+		meta: { size: '7rem' }
+	},
+	{
+		id: 'createdAt',
+		accessorFn: (t) => t.createdAt,
+		header: 'Added',
+		sortFn: 'alphanumeric',
+		enableGlobalFilter: false,
+		cell: (c) => c.row.original.createdAt.slice(0, 10),
+		meta: { size: '7rem' }
+	}
+];
+
+/** Columns shown at first; the rest are a click away in the column chooser. */
+export const INITIAL_HIDDEN = {
+	album: false,
+	introBeats: false,
+	bpmSource: false,
+	createdAt: false
+};
