@@ -1,39 +1,66 @@
-// In-place iterative radix-2 FFT (Cooley–Tukey); n must be a power of two.
-// Small and allocation-free so the onset envelope runs fast in the browser and in Node.
+// In-place iterative radix-2 FFT (Cooley–Tukey); n must be a power of two. The bit-reversal
+// order and twiddle factors are worked out once per size, since the onset envelope runs
+// thousands of same-sized transforms per file.
+
+interface Plan {
+	reverse: Uint32Array;
+	cos: Float64Array;
+	sin: Float64Array;
+}
+
+const plans = new Map<number, Plan>();
+
+function plan(n: number): Plan {
+	let p = plans.get(n);
+	if (p) return p;
+	const bits = Math.log2(n);
+	const reverse = new Uint32Array(n);
+	for (let i = 0; i < n; i++) {
+		let r = 0;
+		for (let b = 0; b < bits; b++) r |= ((i >> b) & 1) << (bits - 1 - b);
+		reverse[i] = r;
+	}
+	const cos = new Float64Array(n / 2);
+	const sin = new Float64Array(n / 2);
+	for (let k = 0; k < n / 2; k++) {
+		cos[k] = Math.cos((-2 * Math.PI * k) / n);
+		sin[k] = Math.sin((-2 * Math.PI * k) / n);
+	}
+	p = { reverse, cos, sin };
+	plans.set(n, p);
+	return p;
+}
 
 export function fft(re: Float64Array, im: Float64Array): void {
 	const n = re.length;
-	for (let i = 1, j = 0; i < n; i++) {
-		let bit = n >> 1;
-		for (; j & bit; bit >>= 1) j ^= bit;
-		j ^= bit;
+	const { reverse, cos, sin } = plan(n);
+	for (let i = 0; i < n; i++) {
+		const j = reverse[i];
 		if (i < j) {
-			[re[i], re[j]] = [re[j], re[i]];
-			[im[i], im[j]] = [im[j], im[i]];
+			const tr = re[i];
+			re[i] = re[j];
+			re[j] = tr;
+			const ti = im[i];
+			im[i] = im[j];
+			im[j] = ti;
 		}
 	}
 	for (let len = 2; len <= n; len <<= 1) {
-		const angle = (-2 * Math.PI) / len;
-		const wr = Math.cos(angle);
-		const wi = Math.sin(angle);
+		const half = len >> 1;
+		const step = n / len;
 		for (let i = 0; i < n; i += len) {
-			let cr = 1;
-			let ci = 0;
-			for (let k = 0; k < len >> 1; k++) {
+			for (let k = 0; k < half; k++) {
 				const a = i + k;
-				const b = a + (len >> 1);
-				const tr = re[b] * cr - im[b] * ci;
-				const ti = re[b] * ci + im[b] * cr;
+				const b = a + half;
+				const wr = cos[k * step];
+				const wi = sin[k * step];
+				const tr = re[b] * wr - im[b] * wi;
+				const ti = re[b] * wi + im[b] * wr;
 				re[b] = re[a] - tr;
 				im[b] = im[a] - ti;
 				re[a] += tr;
 				im[a] += ti;
-				const next = cr * wr - ci * wi;
-				ci = cr * wi + ci * wr;
-				cr = next;
 			}
 		}
 	}
 }
-
-export const nextPow2 = (n: number): number => 2 ** Math.ceil(Math.log2(Math.max(2, n)));

@@ -57,14 +57,14 @@ export function onsetEnvelope(pcm: Float32Array, sampleRate: number): Envelope {
 		fft(re, im);
 		let rise = 0;
 		for (let k = 1; k < bins; k++) {
-			cur[k] = Math.log1p(LOG_GAIN * Math.hypot(re[k], im[k]));
+			cur[k] = Math.log1p(LOG_GAIN * Math.sqrt(re[k] * re[k] + im[k] * im[k]));
 			const d = cur[k] - prev[k];
 			if (d > 0 && f > 0) rise += weight[k] * d;
 		}
 		flux[f] = rise;
 		let low = 0;
 		for (let k = 1; k < bassBins; k++) {
-			curBass[k] = Math.hypot(re[k], im[k]);
+			curBass[k] = Math.sqrt(re[k] * re[k] + im[k] * im[k]);
 			const d = curBass[k] - prevBass[k];
 			if (d > 0 && f > 0) low += d;
 		}
