@@ -1,7 +1,6 @@
 // The objective: a weighted penalty over the laid-out plan (0 is perfect, lower is better), with
 // a large penalty for every hard rule broken so the search always prefers a feasible plan.
 import { energyOf as energyOfImport, energyTarget as energyTargetImport } from './crowd';
-import { trailingBreak as trailingBreakImport } from './breaks';
 import { sizeStretch as sizeStretchImport } from './layout';
 import type { Cand, Plan, Problem } from './model';
 import type { ObjectiveTerms } from './types';
@@ -10,7 +9,6 @@ import type { ObjectiveTerms } from './types';
 const energyOf = energyOfImport;
 const energyTarget = energyTargetImport;
 const sizeStretch = sizeStretchImport;
-const trailingBreak = trailingBreakImport;
 
 export const HARD = 1000;
 const EPS = 1e-6;
@@ -245,8 +243,15 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 		for (let k = 0; k < items.length; k++) {
 			const it = items[k];
 			if (k > 0) t += s.gapS;
-			// A planned break keeps its end: short music leaves idle time before it, not after.
-			if (it.inserted && it.stretch && t < slot.target - it.dur) t = slot.target - it.dur;
+			// A planned break keeps its end: short music leaves idle time before it, not after. A
+			// little idle (up to the end tolerance) is a longer break; more is music missing.
+			if (it.inserted && it.stretch) {
+				const musicEnd = k > 0 ? t - s.gapS : slot.start;
+				const idle = slot.target - s.gapS - it.maxDur - musicEnd;
+				if (idle > s.endToleranceS + EPS) hardAdd(idle * 5);
+				else if (idle > EPS) terms.filler += (idle / 60) * 0.5;
+				if (t < slot.target - it.dur) t = slot.target - it.dur;
+			}
 			const start = t;
 			const end = t + it.dur;
 			if (start - lastEnd >= restGap) restWalk(w);
@@ -299,11 +304,7 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 		if (slot.lo > -Infinity) {
 			const end = items.length ? t : slot.emptyEnd;
 			if (end > slot.hi + EPS) hardAdd((end - slot.hi) * 5);
-			else if (end < slot.lo - EPS) {
-				// Music that stops short of a planned break only leaves the floor idle a little.
-				if (trailingBreak(slot)) terms.filler += ((slot.lo - end) / 60) * 0.5;
-				else hardAdd((slot.lo - end) * 5);
-			}
+			else if (end < slot.lo - EPS) hardAdd((slot.lo - end) * 5);
 		}
 	}
 	const n = hist[0] + hist[1] + hist[2] + hist[3] + hist[4];

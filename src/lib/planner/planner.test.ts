@@ -160,6 +160,19 @@ describe('the planner on an invented four-hour evening', () => {
 		expect(again.objective).toEqual(plan.objective);
 	});
 
+	it('starts the social dancing easier than it goes on', () => {
+		const rank = (id: unknown) =>
+			['absolute-beginner', 'beginner', 'improver', 'intermediate', 'advanced'].indexOf(
+				input.dances.find((d) => d.id === id)!.level
+			);
+		const social = plan.entries.filter((e) => e.kind === 'dance' && e.sectionId !== 's1');
+		const first = social[0].startS;
+		const early = social.filter((e) => e.startS - first < 1800).map((e) => rank(e.danceId));
+		const later = social.filter((e) => e.startS - first >= 1800).map((e) => rank(e.danceId));
+		const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
+		expect(mean(early)).toBeLessThan(mean(later));
+	});
+
 	it('adds up its objective from its terms', () => {
 		const sum = Object.values(plan.objective.terms).reduce((a, b) => a + b, 0);
 		expect(plan.objective.total).toBeCloseTo(sum, 9);
@@ -223,5 +236,49 @@ describe('fit rules', () => {
 		const slowed = plan.entries.find((e) => e.trackId === 13);
 		if (slowed) expect(slowed.durationS).toBeCloseTo(175 / 0.95, 9);
 		expect(checkRunOrder(input, plan.entries).filter((p) => p.rule === 'fit')).toEqual([]);
+	});
+});
+
+describe('what it cannot do, it says', () => {
+	it('explains a request for a dance no track fits, and a must-play it cannot place', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('20:10'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 600 }]
+			},
+			dances: [dance(1), dance(2), dance(3), dance(4, { name: 'Lonely Quiver' })],
+			tracks: [track(11, 180), track(12, 200), track(13, 175)],
+			fits: [fit(1, 11), fit(2, 12), fit(3, 13)],
+			requests: [{ danceId: 4 }],
+			mustPlay: [{ danceId: 1, trackId: 12 }],
+			settings: quick
+		};
+		const plan = planEvening(input);
+		expect(plan.unmet).toContain(
+			'Request for Lonely Quiver not met: no playable track fits it (or it is on the never-play list).'
+		);
+		expect(plan.unmet).toContain(
+			'Must-play Velora Step 1 to "Quiet Lantern 12": that track does not fit it.'
+		);
+	});
+
+	it('reports an evening it cannot fill instead of pretending', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('21:00'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 3600 }]
+			},
+			dances: [dance(1)],
+			tracks: [track(11, 180)],
+			fits: [fit(1, 11)],
+			settings: quick
+		};
+		const plan = planEvening(input);
+		expect(plan.violations.length).toBeGreaterThan(0);
+		expect(plan.violations.join(' ')).toMatch(/not enough music fits/);
 	});
 });

@@ -1,6 +1,6 @@
 // The hard rules, checked on a laid-out plan and reported in plain words. The search keeps them
 // through the objective's penalty; this check says which (if any) the input made impossible.
-import { trailingBreak } from './breaks';
+import { musicEnd, trailingBreak } from './breaks';
 import { place, slotEnd } from './layout';
 import type { Plan, Problem } from './model';
 import { isLessonTempo } from './prepare';
@@ -61,7 +61,16 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 		const title = problem.sections[slot.section]?.title ?? problem.sections[slot.section]?.kind;
 		if (end > slot.hi + EPS)
 			out.push(`The ${title} runs ${minutesWords(end - slot.hi)} over its time.`);
-		if (end < slot.lo - EPS && !trailingBreak(slot))
+		const br = trailingBreak(slot);
+		if (br) {
+			const idle = slot.target - s.gapS - br.maxDur - musicEnd(problem, slot);
+			if (idle > s.endToleranceS + EPS) {
+				out.push(
+					`The ${title} has ${minutesWords(idle)} without music before its break: not enough music fits.`
+				);
+			}
+		}
+		if (end < slot.lo - EPS)
 			out.push(`The ${title} ends ${minutesWords(slot.lo - end)} early: not enough music fits.`);
 	}
 	for (const l of problem.lessons) {
