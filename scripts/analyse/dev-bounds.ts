@@ -1,4 +1,6 @@
-// Scratch: for each generated song, the lift window that would pick the true tempo.
+// Tuning tool (not run by tests): for each of 96 generated songs, the range of the score's lift
+// exponent (score.ts) that picks the true tempo over its ×½, ×⅓, ×2, ×3 and ×3/2 relatives,
+// and the range that suits them all. `npx tsx scripts/analyse/dev-bounds.ts`.
 import { generateSong } from '../../src/lib/synth/song';
 import { onsetEnvelope } from '../../src/lib/tempo/onset';
 import { refine, bpmToPeriod } from '../../src/lib/tempo/comb';

@@ -1,4 +1,5 @@
-// Scratch: resolution accuracy on generated songs in Node (no detector).
+// Tuning tool (not run by tests): resolution accuracy on 48 generated songs in Node, without
+// the detector. `npx tsx scripts/analyse/dev-node.ts [verbose]`; RATE=12000 for another rate.
 import { generateSong } from '../../src/lib/synth/song';
 import { analysePcm } from '../../src/lib/tempo/resolve';
 const rate = Number(process.env.RATE ?? 11025);

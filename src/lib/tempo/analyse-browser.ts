@@ -47,6 +47,9 @@ export interface FileAnalysis {
 		confidence: number;
 		candidates: TempoCandidate[];
 		source: 'detected';
+		/** The file's BPM tag is within 4 % of the measured tempo (so the tag can be shown as
+		 * confirmed); a tag that disagrees is reported in tags.tagBpm and otherwise ignored. */
+		tagAgrees: boolean;
 	};
 	meter: Meter;
 	/** Wall-clock time of the whole analysis, and of its parts. */
@@ -98,7 +101,8 @@ export async function analyseFile(file: Blob, o: AnalyseOptions = {}): Promise<F
 			offsetS: round3((((startS + r.offsetS) % beatS) + beatS) % beatS),
 			confidence: r.confidence,
 			candidates: r.candidates,
-			source: 'detected'
+			source: 'detected',
+			tagAgrees: tags.tagBpm !== null && Math.abs(r.bpm / tags.tagBpm - 1) <= 0.04
 		},
 		meter: r.meter,
 		ms: Math.round(t4 - t0),
