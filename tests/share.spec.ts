@@ -81,33 +81,53 @@ test('a dancer may export a published evening but not a draft', async () => {
 	expect((await dancer.get(`/api/evenings/${EVENING}/export.csv`)).status()).toBe(200);
 	expect((await dancer.get('/api/evenings/2/export.csv')).status()).toBe(404);
 	expect((await dancer.post(`/api/evenings/${EVENING}/publish`, { headers })).status()).toBe(403);
+	expect((await dancer.get(`/evenings/${EVENING}/print`)).status()).toBe(200);
+	expect((await dancer.get('/evenings/2/print')).status()).toBe(404);
 	await dancer.dispose();
 });
 
-test('unpublish and publish again: the old link answers 404, the new one works', async () => {
+test('publishing again over the API keeps the link; an unknown evening is 404', async () => {
 	const first = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
 	expect(first.status()).toBe(200);
-	const { shareUrl: oldUrl } = await first.json();
+	const { shareUrl } = await first.json();
 	// The seed's token (16 bytes) or ours (18 bytes): base64url either way.
-	expect(oldUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{22,24}$`));
-	// Publishing an evening that is already published keeps its link.
+	expect(shareUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{22,24}$`));
 	const again = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
-	expect((await again.json()).shareUrl).toBe(oldUrl);
-	expect((await anon.get(oldUrl)).status()).toBe(200);
+	expect((await again.json()).shareUrl).toBe(shareUrl);
+	expect((await anon.get(shareUrl)).status()).toBe(200);
+	expect((await organiser.delete('/api/evenings/999999/publish', { headers })).status()).toBe(404);
+});
 
-	const off = await organiser.delete(`/api/evenings/${EVENING}/publish`, { headers });
-	expect(off.status()).toBe(200);
+test('the organiser unpublishes and publishes again on the evening page: the old link answers 404', async ({
+	page
+}) => {
+	await signIn(page, 'organiser');
+	await page.goto(`/evenings/${EVENING}`);
+	const share = page.getByRole('region', { name: 'Share' });
+	const link = share.getByTestId('share-url');
+	const oldUrl = (await link.textContent())!.trim();
+	expect((await anon.get(oldUrl)).status()).toBe(200);
+	await expect(share.getByRole('img', { name: "QR code of the dancers' page" })).toBeVisible();
+	for (const ext of ['csv', 'm3u8', 'pdf', 'ics']) {
+		await expect(share.locator(`a[href="/api/evenings/${EVENING}/export.${ext}"]`)).toBeVisible();
+	}
+
+	await share.getByRole('button', { name: 'Unpublish' }).click();
+	await share.getByRole('button', { name: 'Yes, unpublish' }).click();
+	await expect(share.getByRole('button', { name: 'Publish for the dancers' })).toBeVisible();
 	expect((await anon.get(oldUrl)).status()).toBe(404);
 	expect((await anon.get(`${oldUrl}/poster`)).status()).toBe(404);
 	const evening = await (await organiser.get(`/api/evenings/${EVENING}`)).json();
 	expect(evening).toMatchObject({ status: 'draft', shareToken: null });
 
-	const on = await organiser.post(`/api/evenings/${EVENING}/publish`, { headers });
-	const { shareUrl } = await on.json();
-	expect(shareUrl).not.toBe(oldUrl);
+	await share.getByRole('button', { name: 'Publish for the dancers' }).click();
+	await expect(link).toBeVisible();
+	const newUrl = (await link.textContent())!.trim();
+	expect(newUrl).not.toBe(oldUrl);
 	// 18 random bytes are 24 base64url characters (RFC 4648 §5).
-	expect(shareUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{24}$`));
-	expect((await anon.get(shareUrl)).status()).toBe(200);
+	expect(newUrl).toMatch(new RegExp(`^${BASE}/e/[A-Za-z0-9_-]{24}$`));
+	await expect(share.getByRole('img', { name: "QR code of the dancers' page" })).toBeVisible();
+	expect((await anon.get(newUrl)).status()).toBe(200);
 	expect((await anon.get(oldUrl)).status()).toBe(404);
 });
 
@@ -202,6 +222,7 @@ test('the request form is validated, trapped against bots and rate-limited', asy
 });
 
 test('the organiser e-mails the run order; it lands in the outbox with CSV and PDF', async ({
+	page,
 	browser
 }) => {
 	const refused = await organiser.post(`/api/evenings/${EVENING}/email`, {
@@ -209,12 +230,16 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 		headers
 	});
 	expect(refused.status()).toBe(422);
-	const res = await organiser.post(`/api/evenings/${EVENING}/email`, {
-		data: { roles: ['dj', 'instructor'], message: 'Doors at half six (e2e).' },
-		headers
-	});
-	expect(res.status()).toBe(200);
-	expect(await res.json()).toEqual({ sent: 2 });
+
+	await signIn(page, 'organiser');
+	await page.goto(`/evenings/${EVENING}`);
+	const share = page.getByRole('region', { name: 'Share' });
+	// DJs and instructors are ticked to start with: one each in the demo team.
+	await expect(share.getByRole('checkbox', { name: 'DJs' })).toBeChecked();
+	await expect(share.getByRole('checkbox', { name: 'Instructors' })).toBeChecked();
+	await share.getByLabel('A note (optional)').fill('Doors at half six (e2e).');
+	await share.getByRole('button', { name: 'Send the run order' }).click();
+	await expect(share.getByRole('status')).toHaveText('Sent to 2 people.');
 
 	const ctx = await browser.newContext({ baseURL: BASE });
 	const admin = await ctx.newPage();
@@ -228,12 +253,12 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 	await expect(message).toContainText('2 attachment(s)');
 	await message.locator('summary').click();
 	await expect(message).toContainText('Doors at half six (e2e).');
-	await expect(message.getByRole('list', { name: 'Attachments' })).toContainText(
-		`evening-${EVENING}.csv`
-	);
-	await expect(message.getByRole('list', { name: 'Attachments' })).toContainText(
-		`evening-${EVENING}.pdf`
-	);
+	const attachments = message.getByRole('list', { name: 'Attachments' });
+	await expect(attachments).toContainText(`evening-${EVENING}.csv`);
+	await expect(attachments).toContainText(`evening-${EVENING}.pdf`);
+	await expect(
+		admin.getByTestId('outbox-message').filter({ hasText: 'instructor@floorset.test' })
+	).toHaveCount(1);
 	await ctx.close();
 });
 
