@@ -5,7 +5,9 @@ import { describe, expect, it } from 'vitest';
 import type { Meter } from '../domain';
 import { generateSong } from '../synth/song';
 import { accuracy1 } from './accuracy';
-import { onsetEnvelope } from './onset';
+import { bpmToPeriod, refine } from './comb';
+import { guessMeter } from './meter';
+import { onsetEnvelope, type Envelope } from './onset';
 import { analysePcm, resolveTempo } from './resolve';
 
 const RATE = 11025;
@@ -68,5 +70,19 @@ describe('resolveTempo on generated songs', () => {
 
 	it('says so when there is no beat to find', () => {
 		expect(() => analysePcm(new Float32Array(RATE * 5), RATE)).toThrow(/no beat/);
+	});
+});
+
+describe('guessMeter', () => {
+	// Common practice (no source): a waltz accents one beat in three, a backbeat alternates.
+	it('hears threes in a waltz, a backbeat in 4/4, and no accents when bars are taken for beats', () => {
+		const waltz = onsetEnvelope(song(90, 3).samples, RATE);
+		const four = onsetEnvelope(song(120, 4).samples, RATE);
+		const at = (env: Envelope, bpm: number) =>
+			guessMeter(env, refine(env, bpmToPeriod(bpm, env.frameRate)));
+		expect(at(waltz, 90)).toMatchObject({ meter: 3, accented: true });
+		expect(at(four, 120)).toMatchObject({ meter: 4, accented: true });
+		expect(at(waltz, 30).accented).toBe(false);
+		expect(at(four, 30).accented).toBe(false);
 	});
 });

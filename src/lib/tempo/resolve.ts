@@ -71,9 +71,11 @@ export function resolveTempo(env: Envelope, o: ResolveOptions = {}): TempoResult
 
 	const scored = folds.map((f) => {
 		const bpm = periodToBpm(f.period, env.frameRate);
-		const meter = o.meter ?? guessMeter(env, f).meter;
+		const g = guessMeter(env, f, o.meter);
+		const meter = g.meter;
 		const score = candidateScore(f, bpm, {
-			inRhythm: rhythmsAt(bpm, meter).length > 0,
+			// Only where the accents show the meter: bars taken for beats look like 4/4 by default.
+			inRhythm: (o.meter !== undefined || g.accented) && rhythmsAt(bpm, meter).length > 0,
 			hinted: o.rhythm ? inRange(bpm, o.rhythm) : false,
 			tagged: o.tagBpm ? Math.abs(bpm / o.tagBpm - 1) <= 0.04 : false
 		});
