@@ -6,7 +6,7 @@ import { musicEnd, musicWindow, trailingBreak } from './breaks';
 import { danceItem, stretchItem } from './items';
 import type { Cand, Item, Plan, Problem } from './model';
 import { clonePlan } from './model';
-import { evaluate } from './objective';
+import { evaluate, evaluateTotal } from './objective';
 import type { Rng } from './rng';
 
 export interface AnnealResult {
@@ -18,7 +18,7 @@ export interface AnnealResult {
 
 const T_START = 1;
 const T_END = 0.02;
-const SAMPLE = 24;
+const SAMPLE = 12;
 
 interface Ctx {
 	problem: Problem;
@@ -166,7 +166,9 @@ export function anneal(
 	}
 	const ctx: Ctx = { problem, plan, rng, used, danceSlots };
 	const t0 = performance.now();
-	const ratio = T_END / T_START;
+	// Geometric cooling from T_START to T_END over the iteration budget.
+	const cool = Math.pow(T_END / T_START, 1 / iterations);
+	let temp = T_START;
 	let it = 0;
 	let stoppedBy: AnnealResult['stoppedBy'] = 'iterations';
 	for (; it < iterations; it++) {
@@ -174,11 +176,11 @@ export function anneal(
 			stoppedBy = 'time';
 			break;
 		}
+		temp *= cool;
 		const undo = propose(ctx);
 		if (!undo) continue;
-		const next = evaluate(problem, plan).total;
+		const next = evaluateTotal(problem, plan);
 		const delta = next - cur;
-		const temp = T_START * Math.pow(ratio, it / iterations);
 		if (delta <= 0 || rng.next() < Math.exp(-delta / temp)) {
 			cur = next;
 			if (cur < bestTotal - 1e-9) {

@@ -21,7 +21,7 @@ export { fitIsPlayable } from './prepare';
 export function defaultIterations(plan: Plan): number {
 	let movable = 0;
 	for (const s of plan) if (s.kind === 'dance') movable += s.items.length;
-	return Math.min(20_000, Math.max(2_000, movable * 400));
+	return Math.min(12_000, Math.max(2_000, movable * 300));
 }
 
 function finish(problem: Problem, plan: Plan, t0: number, stats: PlanResult['stats']): PlanResult {

@@ -160,6 +160,11 @@ interface Scratch {
 	occRate: number[];
 	occTrack: number[];
 	buf: number[];
+	terms: ObjectiveTerms;
+	weighted: ObjectiveTerms;
+	walk: Walk;
+	hist: number[];
+	lastInSection: Map<number, Cand | null>;
 }
 
 const scratches = new WeakMap<Problem, Scratch>();
@@ -177,7 +182,12 @@ function scratchFor(problem: Problem): Scratch {
 			occStart: [],
 			occRate: [],
 			occTrack: [],
-			buf: []
+			buf: [],
+			terms: zeroTerms(),
+			weighted: zeroTerms(),
+			walk: newWalk(),
+			hist: [0, 0, 0, 0, 0],
+			lastInSection: new Map()
 		};
 		scratches.set(problem, sc);
 	}
@@ -187,6 +197,21 @@ function scratchFor(problem: Problem): Scratch {
 	sc.occRate.length = 0;
 	sc.occTrack.length = 0;
 	return sc;
+}
+
+/** Starts of the social plays of a dance (to a given track, if any), into `out`. */
+function startsOf(sc: Scratch, dance: number, track: number, out: number[]): number[] {
+	out.length = 0;
+	for (let i = 0; i < sc.occDance.length; i++) {
+		if (
+			sc.occDance[i] === dance &&
+			sc.occStart[i] >= 0 &&
+			(track < 0 || sc.occTrack[i] === track)
+		) {
+			out.push(sc.occStart[i]);
+		}
+	}
+	return out;
 }
 
 /** Penalty for a request by where its dance was played (0 in its block, 1 when missing). */
@@ -217,24 +242,40 @@ export function repriseCost(delays: number[]): number {
 	return best;
 }
 
-export function evaluate(problem: Problem, plan: Plan): Evaluation {
+/** Just the total, for the search's inner loop: no objects allocated for the terms. */
+export function evaluateTotal(problem: Problem, plan: Plan): number {
+	return evaluate(problem, plan, true).total;
+}
+
+function resetTerms(t: ObjectiveTerms): ObjectiveTerms {
+	t.difficulty = t.tempo = t.energy = t.rhythm = t.phrasing = t.requests = 0;
+	t.mustPlay = t.lastDance = t.reprise = t.filler = t.breaks = t.hard = 0;
+	return t;
+}
+
+function resetWalk(w: Walk): Walk {
+	restWalk(w);
+	w.sinceAdv = 99;
+	return w;
+}
+
+/** The full evaluation. With `reuse`, the returned terms are scratch, valid until the next call. */
+export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluation {
 	const s = problem.settings;
 	const wt = s.weights;
 	const sc = scratchFor(problem);
 	const gen = sc.gen;
-	const terms = zeroTerms();
+	const terms = reuse ? resetTerms(sc.terms) : zeroTerms();
 	let hardCount = 0;
-	const hardAdd = (extra = 0) => {
-		terms.hard += HARD + extra;
-		hardCount++;
-	};
 	const window = s.repeatWindowMin * 60;
 	const breakLimit = s.breakEveryMin * 60;
 	const restGap = s.breakLengthMin * 60;
-	const w = newWalk();
-	const hist = [0, 0, 0, 0, 0];
+	const w = resetWalk(sc.walk);
+	const hist = sc.hist;
+	hist.fill(0);
 	const firstDance = firstDanceStart(problem, plan);
-	const lastInSection = new Map<number, Cand | null>();
+	const lastInSection = sc.lastInSection;
+	lastInSection.clear();
 	let lastEnd = 0;
 	for (const slot of plan) {
 		sizeStretch(problem, slot);
@@ -248,21 +289,29 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 			if (it.inserted && it.stretch) {
 				const musicEnd = k > 0 ? t - s.gapS : slot.start;
 				const idle = slot.target - s.gapS - it.maxDur - musicEnd;
-				if (idle > s.endToleranceS + EPS) hardAdd(idle * 5);
-				else if (idle > EPS) terms.filler += (idle / 60) * 0.5;
+				if (idle > s.endToleranceS + EPS) {
+					terms.hard += HARD + idle * 5;
+					hardCount++;
+				} else if (idle > EPS) terms.filler += (idle / 60) * 0.5;
 				if (t < slot.target - it.dur) t = slot.target - it.dur;
 			}
 			const start = t;
 			const end = t + it.dur;
 			if (start - lastEnd >= restGap) restWalk(w);
 			// Past the evening's end is never traded for anything else.
-			if (end > problem.eveningS + EPS && !it.locked) hardAdd(HARD * 1000);
+			if (end > problem.eveningS + EPS && !it.locked) {
+				terms.hard += HARD + HARD * 1000;
+				hardCount++;
+			}
 			if (it.kind === 'break') {
 				if (it.inserted) terms.breaks += 0.3;
 				restWalk(w);
 			} else if (it.kind === 'dance' || it.kind === 'walkthrough') {
 				w.dancing += it.dur;
-				if (w.dancing > breakLimit + EPS) hardAdd(Math.min(w.dancing - breakLimit, it.dur));
+				if (w.dancing > breakLimit + EPS) {
+					terms.hard += HARD + Math.min(w.dancing - breakLimit, it.dur);
+					hardCount++;
+				}
 			} else if (it.kind === 'announcement' && !it.locked) {
 				terms.filler += (it.dur / 60) * 0.5;
 			}
@@ -270,7 +319,10 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 			if (it.kind === 'dance' && c && c.dance >= 0) {
 				if (!it.lesson) {
 					const d = c.dance;
-					if (sc.stamp[d] === gen && start - sc.lastStart[d] < window - EPS) hardAdd();
+					if (sc.stamp[d] === gen && start - sc.lastStart[d] < window - EPS) {
+						terms.hard += HARD;
+						hardCount++;
+					}
 					sc.stamp[d] = gen;
 					sc.lastStart[d] = start;
 					if (!it.locked) {
@@ -288,7 +340,10 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 						sc.trackStamp[c.track] = gen;
 						sc.trackUse[c.track] = 0;
 					}
-					if (++sc.trackUse[c.track] > 1) hardAdd();
+					if (++sc.trackUse[c.track] > 1) {
+						terms.hard += HARD;
+						hardCount++;
+					}
 				}
 				sc.occDance.push(c.dance);
 				sc.occStart.push(it.lesson ? -1 : start);
@@ -303,8 +358,13 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 		}
 		if (slot.lo > -Infinity) {
 			const end = items.length ? t : slot.emptyEnd;
-			if (end > slot.hi + EPS) hardAdd((end - slot.hi) * 5);
-			else if (end < slot.lo - EPS) hardAdd((slot.lo - end) * 5);
+			if (end > slot.hi + EPS) {
+				terms.hard += HARD + (end - slot.hi) * 5;
+				hardCount++;
+			} else if (end < slot.lo - EPS) {
+				terms.hard += HARD + (slot.lo - end) * 5;
+				hardCount++;
+			}
 		}
 	}
 	const n = hist[0] + hist[1] + hist[2] + hist[3] + hist[4];
@@ -314,33 +374,23 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 		for (let r = 0; r < 5; r++) l1 += Math.abs(hist[r] / n - mix[r]);
 		terms.difficulty += l1 * n * 0.5;
 	}
-	const startsOf = (dance: number, track: number, out: number[]) => {
-		out.length = 0;
-		for (let i = 0; i < sc.occDance.length; i++) {
-			if (
-				sc.occDance[i] === dance &&
-				sc.occStart[i] >= 0 &&
-				(track < 0 || sc.occTrack[i] === track)
-			) {
-				out.push(sc.occStart[i]);
-			}
-		}
-		return out;
-	};
 	const buf = sc.buf;
 	for (const r of problem.requests) {
-		terms.requests += r.weight * requestCost(problem, r.section, startsOf(r.dance, -1, buf));
+		terms.requests += r.weight * requestCost(problem, r.section, startsOf(sc, r.dance, -1, buf));
 	}
 	for (const m of problem.must)
-		if (startsOf(m.dance, m.track, buf).length === 0) terms.mustPlay += 1;
-	problem.sections.forEach((sec, i) => {
-		if (sec.kind !== 'last-dance') return;
-		if (!lastInSection.has(i)) return void (terms.lastDance += 1);
+		if (startsOf(sc, m.dance, m.track, buf).length === 0) terms.mustPlay += 1;
+	for (let i = 0; i < problem.sections.length; i++) {
+		if (problem.sections[i].kind !== 'last-dance') continue;
+		if (!lastInSection.has(i)) {
+			terms.lastDance += 1;
+			continue;
+		}
 		const c = lastInSection.get(i);
-		if (!c) return;
+		if (!c) continue;
 		const d = problem.dances[c.dance];
 		terms.lastDance += (d.wellKnown ? 0 : 1) + Math.max(0, d.rank - 1) * 0.5;
-	});
+	}
 	for (const l of problem.lessons) {
 		const delays: number[] = [];
 		for (let i = 0; i < sc.occDance.length; i++) {
@@ -348,24 +398,37 @@ export function evaluate(problem: Problem, plan: Plan): Evaluation {
 			if (Math.abs(sc.occRate[i] - 1) <= s.fullTempoTolerance + EPS)
 				delays.push(sc.occStart[i] - l.endS);
 		}
-		if (delays.length === 0) hardAdd();
-		else terms.reprise += repriseCost(delays);
+		if (delays.length === 0) {
+			terms.hard += HARD;
+			hardCount++;
+		} else terms.reprise += repriseCost(delays);
 	}
-	const weighted: ObjectiveTerms = {
-		difficulty: wt.difficulty * terms.difficulty,
-		tempo: wt.tempo * terms.tempo,
-		energy: wt.energy * terms.energy,
-		rhythm: wt.rhythm * terms.rhythm,
-		phrasing: wt.phrasing * terms.phrasing,
-		requests: wt.requests * terms.requests,
-		mustPlay: wt.mustPlay * terms.mustPlay,
-		lastDance: wt.lastDance * terms.lastDance,
-		reprise: wt.reprise * terms.reprise,
-		filler: wt.filler * terms.filler,
-		breaks: wt.breaks * terms.breaks,
-		hard: terms.hard
-	};
-	let total = 0;
-	for (const v of Object.values(weighted)) total += v;
+	const weighted: ObjectiveTerms = reuse ? sc.weighted : zeroTerms();
+	weighted.difficulty = wt.difficulty * terms.difficulty;
+	weighted.tempo = wt.tempo * terms.tempo;
+	weighted.energy = wt.energy * terms.energy;
+	weighted.rhythm = wt.rhythm * terms.rhythm;
+	weighted.phrasing = wt.phrasing * terms.phrasing;
+	weighted.requests = wt.requests * terms.requests;
+	weighted.mustPlay = wt.mustPlay * terms.mustPlay;
+	weighted.lastDance = wt.lastDance * terms.lastDance;
+	weighted.reprise = wt.reprise * terms.reprise;
+	weighted.filler = wt.filler * terms.filler;
+	weighted.breaks = wt.breaks * terms.breaks;
+	weighted.hard = terms.hard;
+
+	const total =
+		weighted.difficulty +
+		weighted.tempo +
+		weighted.energy +
+		weighted.rhythm +
+		weighted.phrasing +
+		weighted.requests +
+		weighted.mustPlay +
+		weighted.lastDance +
+		weighted.reprise +
+		weighted.filler +
+		weighted.breaks +
+		weighted.hard;
 	return { total, terms: weighted, hardCount };
 }

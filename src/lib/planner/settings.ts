@@ -37,7 +37,8 @@ export const DEFAULT_SETTINGS: PlanSettings = {
 	// Teaching slows music by roughly 10–15 % (common practice, REFERENCES.md).
 	lessonFallbackRate: 0.9,
 	weights: DEFAULT_WEIGHTS,
-	timeBudgetMs: 250,
+	// A safety net only: the iteration budget binds, so a busy machine still gets the same plan.
+	timeBudgetMs: 1000,
 	seed: 1
 };
 
