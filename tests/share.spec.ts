@@ -3,6 +3,7 @@
 // and the run order e-mailed with its two attachments into the captured outbox.
 import { expect, request as newRequest, test, type APIRequestContext } from '@playwright/test';
 import ICAL from 'ical.js';
+import jsQR from 'jsqr';
 import Papa from 'papaparse';
 import { BASE, signIn, signInApi } from './helpers';
 
@@ -143,6 +144,19 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 	const qr = page.getByRole('img', { name: /QR code/ });
 	await expect(qr).toBeVisible();
 	expect(await qr.getAttribute('src')).toMatch(/^data:image\/svg\+xml;base64,/);
+	// Drawn by Chromium and read back with jsQR (a general-purpose QR decoder, ISO/IEC 18004):
+	// the code really holds the page's address.
+	const size = 400;
+	const pixels = await qr.evaluate((img: HTMLImageElement, side: number) => {
+		const canvas = document.createElement('canvas');
+		canvas.width = canvas.height = side;
+		const g = canvas.getContext('2d')!;
+		g.fillStyle = '#fff';
+		g.fillRect(0, 0, side, side);
+		g.drawImage(img, 20, 20, side - 40, side - 40);
+		return Array.from(g.getImageData(0, 0, side, side).data);
+	}, size);
+	expect(jsQR(Uint8ClampedArray.from(pixels), size, size)?.data).toBe(shareUrl);
 	await expect(page.getByRole('heading', { name: 'Run order' })).toBeVisible();
 	// The lesson's teacher by first name only; no addresses, surnames, notes or requesters.
 	const html = await page.content();
