@@ -114,6 +114,12 @@ function summary(
 	console.log(`  Accuracy 1       ${pct(a1)}`);
 	console.log(`  Accuracy 2       ${pct(a2)}`);
 	if (label.startsWith('resolved')) console.log(`  meter right      ${pct(meter)}`);
+	const stage = (k: string) =>
+		(lines.reduce((n, l) => n + (l.timings?.[k] ?? 0), 0) / lines.length).toFixed(0);
+	console.log(
+		`  mean ms a file   tags ${stage('tagsMs')}, decode ${stage('decodeMs')}, detector ` +
+			`${stage('detectMs')}, resolution ${stage('resolveMs')}`
+	);
 	console.log(
 		`  speed            overall ${(audio / (ms / 1000)).toFixed(0)}× real time ` +
 			`(${audio.toFixed(0)} s of audio in ${(ms / 1000).toFixed(2)} s); per file min ` +
