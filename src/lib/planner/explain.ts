@@ -8,9 +8,9 @@ import { minutesWords } from './time';
 import type { PlanEntry } from './types';
 
 const CROWD_WORDS = {
-	'mostly-beginners': 'mostly beginner',
-	mixed: 'mixed',
-	experienced: 'experienced'
+	'mostly-beginners': 'a crowd of mostly beginners',
+	mixed: 'a mixed crowd',
+	experienced: 'an experienced crowd'
 } as const;
 
 const fmt = (n: number) => (Math.round(n * 100) / 100).toString();
@@ -53,7 +53,7 @@ function danceReasons(problem: Problem, p: Placed, prev: Placed | null, ctx: Ctx
 		else if (d.rank <= 1 && isAfterLesson(problem, p.start))
 			out.push(`${level} dance right after the lesson`);
 		else if (d.rank === 4) out.push('advanced dance, spaced from the other hard ones');
-		else out.push(`${level} dance for a ${CROWD_WORDS[problem.crowd]} crowd`);
+		else out.push(`${level} dance for ${CROWD_WORDS[problem.crowd]}`);
 	}
 	const rateWords = Math.abs(c.rate - 1) > 1e-9 ? ` at ${fmt(c.rate)}×` : '';
 	out.push(

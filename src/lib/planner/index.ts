@@ -68,3 +68,4 @@ export function plainGreedy(input: PlanInput): PlanResult {
 		seed: settings.seed
 	});
 }
+export { checkRunOrder, type RunOrderProblem } from './check';

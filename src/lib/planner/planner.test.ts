@@ -282,3 +282,47 @@ describe('what it cannot do, it says', () => {
 		expect(plan.violations.join(' ')).toMatch(/not enough music fits/);
 	});
 });
+
+describe('thin or odd input', () => {
+	it('plans nothing, without throwing, for an evening with no sections or no music', () => {
+		const base: PlanInput = {
+			evening: { startsAt: at('20:00'), endsAt: at('22:00'), crowd: 'mixed', sections: [] },
+			dances: [],
+			tracks: [],
+			fits: [],
+			settings: quick
+		};
+		expect(planEvening(base).entries).toEqual([]);
+		const floor = {
+			...base,
+			evening: {
+				...base.evening,
+				sections: [{ id: 'f', kind: 'open-floor' as const, startS: 0, endS: 7200 }]
+			}
+		};
+		const empty = planEvening(floor);
+		expect(empty.violations.join(' ')).toMatch(/not enough music fits/);
+		expect(Number.isFinite(empty.objective.total)).toBe(true);
+	});
+
+	it('trims a section that runs past the evening and says so', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('20:10'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 1200 }]
+			},
+			dances: [dance(1), dance(2), dance(3)],
+			tracks: [track(11, 180), track(12, 200), track(13, 175)],
+			fits: [fit(1, 11), fit(2, 12), fit(3, 13)],
+			settings: { ...quick, endToleranceS: 20 }
+		};
+		const plan = planEvening(input);
+		for (const e of plan.entries) expect(e.startS + e.durationS).toBeLessThanOrEqual(600);
+		expect(plan.violations).toEqual([]);
+		expect(plan.unmet).toContain(
+			'Section "open-floor" ends after the evening, so it was cut at the evening\'s end.'
+		);
+	});
+});

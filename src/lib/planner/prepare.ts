@@ -49,6 +49,10 @@ function readSections(input: PlanInput, eveningS: number, notes: string[]): Sect
 			notes.push(`Section "${s.title ?? s.kind}" lies outside the evening or overlaps another.`);
 			continue;
 		}
+		if (s.endS > eveningS)
+			notes.push(
+				`Section "${s.title ?? s.kind}" ends after the evening, so it was cut at the evening's end.`
+			);
 		if (startS > s.startS) notes.push(`Section "${s.title ?? s.kind}" was trimmed to start later.`);
 		out.push({ id: s.id, kind: s.kind, startS, endS, title: s.title, dance: -1 });
 		floor = endS;
