@@ -70,6 +70,8 @@ const number = (
 	header,
 	sortFn: 'basic',
 	sortUndefined: 'last',
+	// Slowest and shortest first, the order a lesson plan reads in.
+	sortDescFirst: false,
 	enableGlobalFilter: false,
 	cell: (c) => format(c.row.original),
 	meta: { size, numeric: true }

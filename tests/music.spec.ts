@@ -1,0 +1,197 @@
+// The music library end to end, in Chromium, as the DJ: drop generated audio of known tempo and
+// one text file renamed .mp3, watch the batch, check the measured tempi, flip one, tap one, and
+// sort and filter the table (issue 3).
+import { expect, test, type Page } from '@playwright/test';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { encodeWav, generateSong } from '../src/lib/synth/index';
+import { BASE, signIn, signInApi } from './helpers';
+
+// Three songs of known tempo (the check values are the generating tempi) and one impostor.
+const SONGS = [
+	{ name: 'e2e-reel-100.wav', bpm: 100, meter: 4 as const, seed: 11 },
+	{ name: 'e2e-reel-128.wav', bpm: 128, meter: 4 as const, seed: 12 },
+	{ name: 'e2e-reel-90-waltz.wav', bpm: 90, meter: 3 as const, seed: 13 }
+];
+// Accuracy 1 of Gouyon et al., "An experimental comparison of audio tempo induction
+// algorithms", IEEE TASLP 14(5), 2006: an estimate within 4 % of the true tempo is correct.
+const TOLERANCE = 0.04;
+
+let dir: string;
+test.beforeAll(() => {
+	dir = mkdtempSync(join(tmpdir(), 'floorset-e2e-music-'));
+	for (const s of SONGS) {
+		const song = generateSong({
+			bpm: s.bpm,
+			meter: s.meter,
+			durationS: 30,
+			seed: s.seed,
+			pad: true
+		});
+		writeFileSync(join(dir, s.name), encodeWav(song.samples, song.sampleRate));
+	}
+	writeFileSync(
+		join(dir, 'e2e-lyrics.mp3'),
+		'Verse one, the words only, no music here.\n'.repeat(30)
+	);
+});
+test.afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+test.describe.configure({ mode: 'serial' });
+
+const grid = (page: Page) => page.getByTestId('tracks-grid');
+const rowOf = (page: Page, title: string) =>
+	grid(page)
+		.getByTestId('track-row')
+		.filter({ has: page.getByRole('link', { name: title, exact: true }) });
+const bpmOf = async (page: Page, title: string) =>
+	Number(await rowOf(page, title).getByTestId('bpm').textContent());
+
+test('the demo’s 60 tracks load into the table', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await expect(page.getByTestId('library-count')).toHaveText('60 of 60 tracks shown');
+	await expect(grid(page).getByTestId('track-row').first()).toBeVisible();
+});
+
+test('dropping three songs and a text file: progress, three tempi within 4 %, one clear error', async ({
+	page
+}) => {
+	test.setTimeout(120_000);
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await expect(page.getByTestId('library-count')).toHaveText('60 of 60 tracks shown');
+	await page
+		.getByTestId('file-input')
+		.setInputFiles([...SONGS.map((s) => join(dir, s.name)), join(dir, 'e2e-lyrics.mp3')]);
+
+	// The batch bar and one row per file appear at once.
+	await expect(page.getByTestId('batch-item')).toHaveCount(4);
+	await expect(page.getByTestId('batch-progress')).toHaveAttribute('max', '4');
+	await expect(page.getByText(/of 4 files done/)).toBeVisible();
+
+	await expect(page.getByText('4 of 4 files done')).toBeVisible({ timeout: 90_000 });
+	const impostor = page.getByTestId('batch-item').filter({ hasText: 'e2e-lyrics.mp3' });
+	await expect(impostor).toHaveAttribute('data-state', 'failed');
+	await expect(impostor.getByTestId('batch-message')).toContainText(/not (an )?audio/i);
+	for (const s of SONGS) {
+		await expect(page.getByTestId('batch-item').filter({ hasText: s.name })).toHaveAttribute(
+			'data-state',
+			'stored'
+		);
+	}
+
+	// Three new rows, not four.
+	await expect(page.getByTestId('library-count')).toHaveText('63 of 63 tracks shown');
+	await page.getByLabel('Search title, artist, album').fill('e2e-');
+	await expect(grid(page).getByTestId('track-row')).toHaveCount(3);
+	for (const s of SONGS) {
+		const title = s.name.replace(/\.wav$/, '');
+		const bpm = await bpmOf(page, title);
+		expect(Math.abs(bpm / s.bpm - 1), `${title}: measured ${bpm}`).toBeLessThanOrEqual(TOLERANCE);
+	}
+});
+
+test('the server stored nothing for the impostor', async ({ playwright }) => {
+	const request = await playwright.request.newContext({ baseURL: BASE });
+	await signInApi(request, 'dj');
+	const res = await request.get('/api/tracks?q=e2e-&limit=10');
+	const body = (await res.json()) as { total: number; items: { originalName: string }[] };
+	expect(body.total).toBe(3);
+	expect(body.items.map((i) => i.originalName)).not.toContain('e2e-lyrics.mp3');
+	await request.dispose();
+});
+
+test('a tempo flips ×2 and back ÷2 in one click each', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await page.getByLabel('Search title, artist, album').fill('e2e-reel-100');
+	const before = await bpmOf(page, 'e2e-reel-100');
+	await rowOf(page, 'e2e-reel-100')
+		.getByRole('button', { name: /Double the tempo/ })
+		.click();
+	await expect(rowOf(page, 'e2e-reel-100').getByTestId('bpm')).not.toHaveText(String(before));
+	const doubled = await bpmOf(page, 'e2e-reel-100');
+	expect(Math.abs(doubled / (before * 2) - 1)).toBeLessThanOrEqual(TOLERANCE);
+	await rowOf(page, 'e2e-reel-100')
+		.getByRole('button', { name: /Halve the tempo/ })
+		.click();
+	await expect(rowOf(page, 'e2e-reel-100').getByTestId('bpm')).not.toHaveText(String(doubled));
+	expect(Math.abs((await bpmOf(page, 'e2e-reel-100')) / before - 1)).toBeLessThanOrEqual(TOLERANCE);
+});
+
+test('tapping a tempo on the track page saves it as tapped', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await page.getByLabel('Search title, artist, album').fill('e2e-reel-128');
+	await rowOf(page, 'e2e-reel-128').getByRole('link', { name: 'e2e-reel-128' }).click();
+	await expect(page.getByTestId('track-title')).toHaveText('e2e-reel-128');
+	// Eight taps about 500 ms apart (120 BPM), on the keyboard. The test records when each
+	// press went out; on a busy machine the gaps stretch, so the check is against the median of
+	// the gaps actually made (the tap-tempo rule: the median interval, 60 000 ÷ ms = BPM).
+	await page.getByRole('button', { name: 'Tap', exact: true }).focus();
+	const at: number[] = [];
+	for (let i = 0; i < 8; i++) {
+		at.push(Date.now());
+		await page.keyboard.press('Space');
+		if (i < 7) await page.waitForTimeout(500);
+	}
+	await expect(page.getByTestId('tap-readout')).toContainText('from 8 taps');
+	const readout = await page.getByTestId('tap-readout').textContent();
+	const tapped = Number(/([\d.]+) BPM/.exec(readout ?? '')?.[1]);
+	const gaps = at
+		.slice(1)
+		.map((t, i) => t - at[i])
+		.sort((a, b) => a - b);
+	const expected = 60_000 / ((gaps[3] + gaps[4]) / 2);
+	expect(Math.abs(tapped / expected - 1), `tapped ${tapped}, gaps ${gaps}`).toBeLessThan(0.1);
+	expect(tapped).toBeGreaterThan(60);
+	expect(tapped).toBeLessThan(125);
+	await page.getByRole('button', { name: /^Use / }).click();
+	await expect(page.getByTestId('track-bpm')).toHaveText(String(tapped));
+	await expect(page.getByTestId('track-bpm-source')).toHaveText('tapped');
+	// The rate control shows the tempo heard at that rate: bpm × rate.
+	await page.getByRole('button', { name: '0.9×' }).click();
+	await expect(page.getByTestId('effective-bpm')).toContainText(
+		`${Math.round(tapped * 0.9 * 10) / 10} BPM`
+	);
+});
+
+test('the table sorts, filters by tempo and meter, and moves by keyboard', async ({ page }) => {
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await expect(page.getByTestId('library-count')).toHaveText('63 of 63 tracks shown');
+	const tempoHeader = grid(page).getByRole('columnheader', { name: 'Tempo', exact: true });
+	await tempoHeader.getByRole('button').click();
+	await expect(tempoHeader).toHaveAttribute('aria-sort', 'ascending');
+	const firstTen = async () =>
+		(await grid(page).getByTestId('bpm').allTextContents()).slice(0, 10).map(Number);
+	const ascending = await firstTen();
+	expect(ascending).toEqual([...ascending].sort((a, b) => a - b));
+	await tempoHeader.getByRole('button').click();
+	const descending = await firstTen();
+	expect(descending).toEqual([...descending].sort((a, b) => b - a));
+
+	await page.getByLabel('Slowest (BPM)').fill('100');
+	await page.getByLabel('Fastest (BPM)').fill('110');
+	const inRange = (await grid(page).getByTestId('bpm').allTextContents()).map(Number);
+	expect(inRange.length).toBeGreaterThan(0);
+	for (const b of inRange) expect(b >= 100 && b <= 110, `${b}`).toBe(true);
+
+	await page.getByLabel('Slowest (BPM)').fill('');
+	await page.getByLabel('Fastest (BPM)').fill('');
+	await page.getByRole('search').getByLabel('Meter').selectOption('3');
+	const shown = await page.getByTestId('library-count').textContent();
+	const waltzes = Number(/^(\d+) of/.exec(shown ?? '')?.[1]);
+	expect(waltzes).toBeGreaterThan(0);
+	expect(waltzes).toBeLessThan(63);
+
+	// Keyboard: focus the grid, move down a row, Enter opens that track.
+	await grid(page).focus();
+	await page.keyboard.press('ArrowDown');
+	const active = await grid(page).getAttribute('aria-activedescendant');
+	expect(active).toMatch(/^track-row-\d+$/);
+	await page.keyboard.press('Enter');
+	await expect(page).toHaveURL(new RegExp(`/music/${active!.replace('track-row-', '')}$`));
+});
