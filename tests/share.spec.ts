@@ -9,82 +9,126 @@ import { BASE, signIn, signInApi } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
 
+// Other spec files run beside this one on the same server, so the tests that change state (a
+// run order, the request limit) use an evening of their own; evening 1 is kept for what the
+// issue asks of the demo (publish round trip, public page, e-mail).
 const EVENING = 1; // the demo's published "Lantern Night Social"
+let own = 0; // an invented evening this file creates, plans and deletes again
 let organiser: APIRequestContext;
 let anon: APIRequestContext;
 
 const headers = { origin: BASE, accept: 'application/json' };
 
-/** Evening 1 has no run order in the seed: plan one and save it through the team's API. */
-async function ensureRunOrder(api: APIRequestContext) {
-	const current = await (await api.get(`/api/evenings/${EVENING}/run-order`)).json();
-	if (current.entries.length > 0) return current.entries.length as number;
-	const planned = await api.post(`/api/evenings/${EVENING}/plan`, { data: { seed: 5 }, headers });
+/** An invented two-hour evening with a planned and saved run order, through the team's API. */
+async function makeOwnEvening(api: APIRequestContext): Promise<number> {
+	const created = await api.post('/api/evenings', {
+		headers,
+		data: {
+			title: 'Copperlane Share Check',
+			venue: 'Fenny Row Barn, Upper Marrowby',
+			startsAt: '2027-02-05T19:00:00Z',
+			endsAt: '2027-02-05T21:00:00Z',
+			crowd: 'mixed',
+			notes: 'Private note: the urn key is under the mat.',
+			sections: [
+				{
+					kind: 'open-floor',
+					title: 'Open floor',
+					startsAt: '2027-02-05T19:00:00Z',
+					endsAt: '2027-02-05T20:50:00Z'
+				},
+				{
+					kind: 'last-dance',
+					title: 'Last dance',
+					startsAt: '2027-02-05T20:50:00Z',
+					endsAt: '2027-02-05T21:00:00Z'
+				}
+			]
+		}
+	});
+	expect(created.status(), await created.text()).toBe(201);
+	const evening = await created.json();
+	const planned = await api.post(`/api/evenings/${evening.id}/plan`, {
+		data: { seed: 5 },
+		headers
+	});
 	expect(planned.status()).toBe(200);
 	const { entries } = await planned.json();
-	const saved = await api.put(`/api/evenings/${EVENING}/run-order`, {
-		data: { version: current.runOrderVersion, entries },
+	const saved = await api.put(`/api/evenings/${evening.id}/run-order`, {
+		data: { version: evening.runOrderVersion, entries },
 		headers
 	});
 	expect(saved.status(), await saved.text()).toBe(200);
-	return entries.length as number;
+	return evening.id as number;
 }
 
 test.beforeAll(async () => {
 	organiser = await newRequest.newContext({ baseURL: BASE });
 	await signInApi(organiser, 'organiser');
 	anon = await newRequest.newContext({ baseURL: BASE });
-	await ensureRunOrder(organiser);
+	own = await makeOwnEvening(organiser);
 });
 
 test.afterAll(async () => {
+	if (own) await organiser.delete(`/api/evenings/${own}`, { headers });
 	await organiser.dispose();
 	await anon.dispose();
-});
-
-test('exports download as attachments and read back with independent parsers', async () => {
-	const entries = (await (await organiser.get(`/api/evenings/${EVENING}/run-order`)).json())
-		.entries as { kind: string; trackId: number | null }[];
-	const csv = await organiser.get(`/api/evenings/${EVENING}/export.csv`);
-	expect(csv.status()).toBe(200);
-	expect(csv.headers()['content-disposition']).toBe(
-		`attachment; filename="evening-${EVENING}.csv"`
-	);
-	// papaparse reading RFC 4180 CSV: one record per entry after the header.
-	const rows = Papa.parse<string[]>(await csv.text(), { newline: '\r\n' }).data.filter(
-		(r) => r.length > 1
-	);
-	expect(rows[0][0]).toBe('position');
-	expect(rows).toHaveLength(entries.length + 1);
-
-	// RFC 8216 §4.3.2.1: one #EXTINF per dance with a track, each followed by its audio URL.
-	const m3u = await (await organiser.get(`/api/evenings/${EVENING}/export.m3u8`)).text();
-	const lines = m3u.split('\n');
-	expect(lines[0]).toBe('#EXTM3U');
-	const dances = entries.filter((e) => e.kind === 'dance' && e.trackId);
-	expect(lines.filter((l) => /^#EXTINF:\d+,/.test(l))).toHaveLength(dances.length);
-	expect(lines).toContain(`${BASE}/api/tracks/${dances[0].trackId}/audio`);
-
-	// ical.js reading RFC 5545: the UID and the evening's start, with the public page's URL.
-	const ics = await (await organiser.get(`/api/evenings/${EVENING}/export.ics`)).text();
-	const event = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
-	expect(event.getFirstPropertyValue('summary')).toBe('Lantern Night Social');
-	expect(String(event.getFirstPropertyValue('url'))).toMatch(/\/e\/[A-Za-z0-9_-]{16,}$/);
-
-	const pdf = await organiser.get(`/api/evenings/${EVENING}/export.pdf`);
-	expect(pdf.headers()['content-type']).toBe('application/pdf');
-	expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
 });
 
 test('a dancer may export a published evening but not a draft', async () => {
 	const dancer = await newRequest.newContext({ baseURL: BASE });
 	await signInApi(dancer, 'dancer');
 	expect((await dancer.get(`/api/evenings/${EVENING}/export.csv`)).status()).toBe(200);
-	expect((await dancer.get('/api/evenings/2/export.csv')).status()).toBe(404);
+	expect((await dancer.get(`/api/evenings/${own}/export.csv`)).status()).toBe(404);
+	expect((await dancer.get(`/api/evenings/${own}/export.pdf`)).status()).toBe(404);
 	expect((await dancer.post(`/api/evenings/${EVENING}/publish`, { headers })).status()).toBe(403);
 	expect((await dancer.get(`/evenings/${EVENING}/print`)).status()).toBe(200);
-	expect((await dancer.get('/evenings/2/print')).status()).toBe(404);
+	expect((await dancer.get(`/evenings/${own}/print`)).status()).toBe(404);
 	await dancer.dispose();
+});
+
+test('exports download as attachments and read back with independent parsers', async () => {
+	const { shareUrl } = await (
+		await organiser.post(`/api/evenings/${own}/publish`, { headers })
+	).json();
+	const entries = (await (await organiser.get(`/api/evenings/${own}/run-order`)).json())
+		.entries as { kind: string; trackId: number | null; durationS: number }[];
+	expect(entries.length).toBeGreaterThan(5);
+	const csv = await organiser.get(`/api/evenings/${own}/export.csv`);
+	expect(csv.status()).toBe(200);
+	expect(csv.headers()['content-disposition']).toBe(`attachment; filename="evening-${own}.csv"`);
+	// papaparse reading RFC 4180 CSV: one record per entry after the header, durations as saved.
+	const rows = Papa.parse<string[]>(await csv.text(), { newline: '\r\n' }).data.filter(
+		(r) => r.length > 1
+	);
+	expect(rows[0][0]).toBe('position');
+	expect(rows).toHaveLength(entries.length + 1);
+	expect(rows.slice(1).map((r) => Number(r[10]))).toEqual(
+		entries.map((e) => Math.round(e.durationS))
+	);
+
+	// RFC 8216 §4.3.2.1: one #EXTINF per dance with a track, each followed by its audio URL.
+	const m3u = await (await organiser.get(`/api/evenings/${own}/export.m3u8`)).text();
+	const lines = m3u.split('\n');
+	expect(lines[0]).toBe('#EXTM3U');
+	const dances = entries.filter((e) => e.kind === 'dance' && e.trackId);
+	expect(lines.filter((l) => /^#EXTINF:\d+,/.test(l))).toHaveLength(dances.length);
+	expect(lines).toContain(`${BASE}/api/tracks/${dances[0].trackId}/audio`);
+	const audio = await organiser.get(`/api/tracks/${dances[0].trackId}/audio`);
+	expect(audio.status()).toBe(200);
+
+	// ical.js reading RFC 5545: the summary, the UTC start and the public page's URL.
+	const ics = await (await organiser.get(`/api/evenings/${own}/export.ics`)).text();
+	const event = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
+	expect(event.getFirstPropertyValue('summary')).toBe('Copperlane Share Check');
+	const start = event.getFirstPropertyValue('dtstart') as ICAL.Time;
+	expect(start.toJSDate().toISOString()).toBe('2027-02-05T19:00:00.000Z');
+	expect(event.getFirstPropertyValue('url')).toBe(shareUrl);
+
+	const pdf = await organiser.get(`/api/evenings/${own}/export.pdf`);
+	expect(pdf.headers()['content-type']).toBe('application/pdf');
+	expect(pdf.headers()['content-disposition']).toBe(`attachment; filename="evening-${own}.pdf"`);
+	expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
 });
 
 test('publishing again over the API keeps the link; an unknown evening is 404', async () => {
@@ -196,7 +240,7 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 
 test('the request form is validated, trapped against bots and rate-limited', async ({ page }) => {
 	const { shareUrl } = await (
-		await organiser.post(`/api/evenings/${EVENING}/publish`, { headers })
+		await organiser.post(`/api/evenings/${own}/publish`, { headers })
 	).json();
 	const send = (form: Record<string, string>) =>
 		anon.post(`${shareUrl}?/request`, {
@@ -208,6 +252,8 @@ test('the request form is validated, trapped against bots and rate-limited', asy
 			type: string;
 			status: number;
 		};
+	// The evening's notes are the team's, never the dancers'.
+	expect(await (await anon.get(shareUrl)).text()).not.toContain('urn key');
 	// No dance named: refused with 422 (validation happens before the limit counts).
 	expect(await outcome({ danceId: '', danceName: '', message: '' })).toMatchObject({
 		type: 'failure',
@@ -220,19 +266,19 @@ test('the request form is validated, trapped against bots and rate-limited', asy
 	expect(
 		await outcome({ danceName: 'Bot Polka', website: 'http://spam.example', message: 'bot-e2e' })
 	).toMatchObject({ type: 'success' });
-	// Five per ten minutes per address and evening (the page's earlier request counted one).
+	// Five per ten minutes per address and evening.
 	const results: number[] = [];
-	for (let i = 0; i < 5; i++) {
+	for (let i = 0; i < 6; i++) {
 		const r = await outcome({ danceName: `Invented Reel ${i}`, message: '' });
 		results.push(r.type === 'success' ? 200 : r.status);
 	}
-	expect(results).toEqual([200, 200, 200, 200, 429]);
+	expect(results).toEqual([200, 200, 200, 200, 200, 429]);
 	// The bot's request was never stored; the dancers' were.
 	await signIn(page, 'dj');
 	await page.goto('/requests');
 	await expect(page.getByText('Invented Reel 3')).toBeVisible();
 	await expect(page.getByText('bot-e2e')).toHaveCount(0);
-	await expect(page.getByText('Invented Reel 4')).toHaveCount(0);
+	await expect(page.getByText('Invented Reel 5')).toHaveCount(0);
 });
 
 test('the organiser e-mails the run order; it lands in the outbox with CSV and PDF', async ({
@@ -278,8 +324,8 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 
 test('the print view shows the run sheet and hides the navigation in print', async ({ page }) => {
 	await signIn(page, 'organiser');
-	await page.goto(`/evenings/${EVENING}/print`);
-	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
+	await page.goto(`/evenings/${own}/print`);
+	await expect(page.getByRole('heading', { name: 'Copperlane Share Check' })).toBeVisible();
 	await expect(page.getByRole('table')).toBeVisible();
 	await expect(page.getByText('100 dB LAeq over any 15 minutes')).toBeVisible();
 	await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
