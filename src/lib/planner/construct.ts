@@ -15,7 +15,7 @@ import {
 	requestCost,
 	restWalk,
 	type Walk
-} from './objective';
+} from './costs';
 import { buildSlots } from './slots';
 import type { LockedEntry } from './types';
 

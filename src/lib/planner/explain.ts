@@ -3,7 +3,7 @@
 import { LEVEL_LABELS, LEVELS } from '../domain';
 import { place, type Placed } from './layout';
 import type { Plan, Problem } from './model';
-import { firstDanceStart, isAfterLesson, isEarly } from './objective';
+import { firstDanceStart, isAfterLesson, isEarly } from './costs';
 import { minutesWords } from './time';
 import type { PlanEntry } from './types';
 
