@@ -389,7 +389,11 @@ async function send(row: Hostile) {
 		body = b.raw;
 	} else if (b && 'upload' in b) {
 		const form = new FormData();
-		form.set('file', new Blob([b.upload as BlobPart], { type: b.type ?? 'application/octet-stream' }), b.name);
+		form.set(
+			'file',
+			new Blob([b.upload as BlobPart], { type: b.type ?? 'application/octet-stream' }),
+			b.name
+		);
 		if (b.analysis != null) form.set('analysis', b.analysis);
 		body = form;
 	} else if (b && 'form' in b) {
