@@ -195,3 +195,42 @@ test('the table sorts, filters by tempo and meter, and moves by keyboard', async
 	await page.keyboard.press('Enter');
 	await expect(page).toHaveURL(new RegExp(`/music/${active!.replace('track-row-', '')}$`));
 });
+
+test('bulk edit: select the shown rows, set an intro, mark them for a dance, filter by it', async ({
+	page,
+	playwright
+}) => {
+	await signIn(page, 'dj');
+	await page.goto('/music');
+	await expect(page.getByTestId('library-count')).toHaveText('63 of 63 tracks shown');
+	await page.getByLabel('Search title, artist, album').fill('e2e-');
+	await expect(grid(page).getByTestId('track-row')).toHaveCount(3);
+	await page.getByLabel('Select all shown').check();
+	await expect(page.getByRole('heading', { name: '3 selected' })).toBeVisible();
+
+	await page.getByLabel('Intro (beats)').fill('8');
+	await page.getByRole('button', { name: 'Apply to selected' }).click();
+	await expect(page.getByText('Facts: 3 of 3 saved.')).toBeVisible();
+
+	const dance = page.getByLabel('Mark selected for the dance');
+	const danceName = (await dance.locator('option').nth(1).textContent())!.trim();
+	await dance.selectOption({ label: danceName });
+	await page.getByRole('button', { name: 'Mark selected' }).click();
+	await expect(page.getByText('Verdicts: 3 of 3 saved.')).toBeVisible();
+
+	// The server now holds both changes.
+	const request = await playwright.request.newContext({ baseURL: BASE });
+	await signInApi(request, 'dj');
+	const body = (await (await request.get('/api/tracks?q=e2e-')).json()) as {
+		items: { introBeats: number }[];
+	};
+	expect(body.items.map((i) => i.introBeats)).toEqual([8, 8, 8]);
+	await request.dispose();
+
+	// The dance filter shows the tracks the team marked for it: the three, and no others
+	// with this search.
+	await page.getByRole('search').getByLabel('Dance').selectOption({ label: danceName });
+	await expect(grid(page).getByTestId('track-row')).toHaveCount(3);
+	await page.getByRole('search').getByLabel('Verdict').selectOption('does-not-fit');
+	await expect(grid(page).getByTestId('track-row')).toHaveCount(0);
+});
