@@ -239,6 +239,38 @@ describe('fit rules', () => {
 	});
 });
 
+describe('locks the team chose', () => {
+	it('keeps a locked entry even on a track marked "does not fit", and warns', () => {
+		const input: PlanInput = {
+			evening: {
+				startsAt: at('20:00'),
+				endsAt: at('20:10'),
+				crowd: 'mixed',
+				sections: [{ id: 'f', kind: 'open-floor', startS: 0, endS: 600 }]
+			},
+			dances: [dance(1), dance(2), dance(3)],
+			tracks: [track(11, 180), track(12, 200), track(13, 175)],
+			fits: [fit(1, 11, { verdict: 'does-not-fit' }), fit(2, 12), fit(3, 13)],
+			locked: [
+				{
+					position: 0,
+					startS: 0,
+					entry: { kind: 'dance', danceId: 1, trackId: 11, durationS: 180, rate: 1 }
+				}
+			],
+			settings: { ...quick, endToleranceS: 20 }
+		};
+		const plan = planEvening(input);
+		expect(plan.entries[0]).toMatchObject({ locked: true, danceId: 1, trackId: 11, startS: 0 });
+		// The rest fills around it: 180 + 15 + 200 + 15 + 175 = 585 s, or the other order.
+		expect(plan.entries.slice(1).map((e) => e.startS)).toEqual([
+			195,
+			195 + plan.entries[1].durationS + 15
+		]);
+		expect(plan.unmet.join(' ')).toMatch(/position 1 plays a track that is not a playable fit/);
+	});
+});
+
 describe('what it cannot do, it says', () => {
 	it('explains a request for a dance no track fits, and a must-play it cannot place', () => {
 		const input: PlanInput = {

@@ -11,6 +11,11 @@ function lockItem(problem: Problem, lock: LockedEntry): Item {
 	let cand: Cand | null = null;
 	if (e.kind === 'dance' && d >= 0) {
 		const known = problem.dances[d].cands.find((c) => c.track === t);
+		if (!known) {
+			problem.inputNotes.push(
+				`The locked entry at position ${lock.position + 1} plays a track that is not a playable fit for ${problem.dances[d].name} (or is on the never-play list); it stays because it is locked.`
+			);
+		}
 		const bpm = t >= 0 ? problem.tracks[t].bpm : null;
 		cand = {
 			dance: d,
