@@ -167,6 +167,38 @@ test('the DJ judges dances from a track’s own list', async ({ page }) => {
 	expect(after.items.at(-1).dance.id).toBe(danceId);
 });
 
+test('the crowd level changes the lesson target', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto(`/dances/${danceId}?level=beginner#lesson`);
+	await page.getByLabel("The crowd's level").selectOption('improver');
+	await page.getByRole('button', { name: 'Show music for this level' }).click();
+	// 10 % below 110 BPM for improvers (the fit engine's default, common teaching practice).
+	await expect(page.getByTestId('lesson-target')).toContainText('99 BPM');
+	await expect(page.getByTestId('pacing-caution')).toHaveCount(0);
+	await expect(page).toHaveURL(/level=improver/);
+});
+
+test('the DJ marks several tracks for the dance in one call', async ({ page }) => {
+	await signIn(page, 'dj');
+	const fits = await (await page.request.get(`/api/dances/${danceId}/fits?limit=6`)).json();
+	const trackIds = fits.items.slice(3, 6).map((i: { track: { id: number } }) => i.track.id);
+	const res = await page.request.put('/api/fits', {
+		data: { danceId, trackIds, verdict: 'fits' },
+		headers: { origin: BASE }
+	});
+	expect(res.status()).toBe(200);
+	expect((await res.json()).items.map((i: { trackId: number }) => i.trackId)).toEqual(trackIds);
+	const unknown = await page.request.put('/api/fits', {
+		data: { danceId, trackIds: [trackIds[0], 999999], verdict: 'does-not-fit' },
+		headers: { origin: BASE }
+	});
+	expect(unknown.status()).toBe(404);
+	const after = await (await page.request.get(`/api/dances/${danceId}/fits?limit=10`)).json();
+	const first = after.items.find((i: { track: { id: number } }) => i.track.id === trackIds[0]);
+	// All or nothing: the refused call left the first track's "fits" in place.
+	expect(first.verdict).toBe('fits');
+});
+
 test('a dancer can read dances but not edit them', async ({ page }) => {
 	await signIn(page, 'dancer');
 	const view = await page.goto(`/dances/${danceId}`);

@@ -126,6 +126,16 @@ export const fitVerdictSchema = z.object({
 });
 export type FitVerdictInput = z.infer<typeof fitVerdictSchema>;
 
+/** Several tracks marked for one dance in one step (the music table's selection). */
+export const fitVerdictBulkSchema = fitVerdictSchema.omit({ trackId: true }).extend({
+	trackIds: z
+		.array(z.number().int().positive())
+		.min(1, 'Choose at least one track.')
+		.max(500, 'Mark at most 500 tracks at a time.')
+		.refine((ids) => new Set(ids).size === ids.length, 'A track is listed twice.')
+});
+export type FitVerdictBulkInput = z.infer<typeof fitVerdictBulkSchema>;
+
 /** zod issues as { 'tags.0.afterCount': 'message' }, first message per field, for the forms. */
 export function fieldErrors(error: z.ZodError): Record<string, string> {
 	const out: Record<string, string> = {};

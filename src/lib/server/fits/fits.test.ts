@@ -8,7 +8,7 @@ import { eq, sql } from 'drizzle-orm';
 import { fits, tracks } from '../db/schema';
 import { trackFacts } from './load';
 import { fitsForDance, fitsForTrack, parseLimit } from './ranking';
-import { setVerdict } from './verdicts';
+import { setVerdict, setVerdicts } from './verdicts';
 
 let t: ReturnType<typeof makeTestDb>;
 beforeEach(() => (t = makeTestDb()));
@@ -139,5 +139,20 @@ describe('the cached track facts', () => {
 		const first = trackFacts();
 		setVerdict({ trackId: a.id, danceId: dance.id, verdict: 'fits' }, user);
 		expect(trackFacts().facts).toBe(first.facts);
+	});
+});
+
+describe('several tracks marked at once', () => {
+	test('writes every verdict, or none when one track is unknown', () => {
+		const user = aUser(t.db);
+		const dance = createDance(aDance(), user);
+		const a = aTrack(t.db);
+		const b = aTrack(t.db);
+		const bad = setVerdicts({ danceId: dance.id, trackIds: [a.id, 9999], verdict: 'fits' }, user);
+		expect(!bad.ok && bad.status).toBe(404);
+		expect(t.db.select().from(fits).all()).toEqual([]);
+		const good = setVerdicts({ danceId: dance.id, trackIds: [a.id, b.id], verdict: 'fits' }, user);
+		expect(good.ok && good.fits.map((f) => f.trackId)).toEqual([a.id, b.id]);
+		expect(t.db.select().from(fits).all()).toHaveLength(2);
 	});
 });

@@ -1,7 +1,7 @@
 // The team's verdict on a track for a dance: one row per pair, replaced by the latest word.
 import { sql } from 'drizzle-orm';
 import { fitTrackToDance } from '../../fit';
-import type { FitVerdictInput } from '../../schemas/dance';
+import type { FitVerdictBulkInput, FitVerdictInput } from '../../schemas/dance';
 import { danceRow } from '../dances/catalogue';
 import { danceFacts } from '../dances/dance-json';
 import { db } from '../db';
@@ -55,4 +55,35 @@ export function setVerdict(input: FitVerdictInput, userId: number): VerdictResul
 		.returning()
 		.get();
 	return { ok: true, fit };
+}
+
+export type BulkResult =
+	| { ok: true; fits: (typeof fits.$inferSelect)[] }
+	| { ok: false; status: 404 | 422; error: string };
+
+/** The same verdict for several tracks and one dance, all or nothing. */
+export function setVerdicts(input: FitVerdictBulkInput, userId: number): BulkResult {
+	const { trackIds, ...rest } = input;
+	try {
+		const saved = db().transaction(() =>
+			trackIds.map((trackId) => {
+				const r = setVerdict({ ...rest, trackId }, userId);
+				if (!r.ok) throw new BulkStop(r.status, `Track ${trackId}: ${r.error}`);
+				return r.fit;
+			})
+		);
+		return { ok: true, fits: saved };
+	} catch (e) {
+		if (e instanceof BulkStop) return { ok: false, status: e.status, error: e.message };
+		throw e;
+	}
+}
+
+class BulkStop extends Error {
+	constructor(
+		readonly status: 404 | 422,
+		message: string
+	) {
+		super(message);
+	}
 }
