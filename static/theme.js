@@ -4,5 +4,7 @@
 		var t = localStorage.getItem('floorset-theme');
 		if (t === 'dark' || (!t && matchMedia('(prefers-color-scheme: dark)').matches))
 			document.documentElement.classList.add('dark');
-	} catch (e) {}
+	} catch {
+		// Storage may be blocked; the system preference then decides.
+	}
 })();
