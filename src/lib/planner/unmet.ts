@@ -93,6 +93,14 @@ export function unmetPreferences(problem: Problem, plan: Plan): string[] {
 		}
 		prevRh = d.rhythm;
 	});
+	placed.forEach((p, idx) => {
+		const lock = p.item.lock;
+		if (lock && lock.position !== idx) {
+			out.push(
+				`The locked entry that was at position ${lock.position + 1} is now at position ${idx + 1}: its start time is kept, the entries before it changed.`
+			);
+		}
+	});
 	for (const p of placed) {
 		if (p.item.kind === 'announcement' && !p.item.locked) {
 			out.push(
