@@ -5,7 +5,8 @@ import { createHash } from 'node:crypto';
 import { parseBuffer } from 'music-metadata';
 import { count } from 'drizzle-orm';
 import type { Db } from '../src/lib/server/db';
-import { dances, fits, requests, tracks, users } from '../src/lib/server/db/schema';
+import { dances, evenings, fits, requests, tracks, users } from '../src/lib/server/db/schema';
+import { planAndSave } from '../src/lib/server/evenings/plan';
 import { hashPassword } from '../src/lib/server/passwords';
 import type { Storage } from '../src/lib/server/storage';
 import { createUser } from '../src/lib/server/users';
@@ -141,6 +142,13 @@ export async function seedDemo(db: Db, options: SeedOptions): Promise<boolean> {
 			})
 			.run();
 	});
+	// Plan both evenings with the real planner, as an organiser pressing "Plan" would.
+	for (const e of db.select({ id: evenings.id, title: evenings.title }).from(evenings).all()) {
+		const { plan } = planAndSave(e.id, 1);
+		log(
+			`  planned “${e.title}”: ${plan.entries.length} entries in ${plan.ms.toFixed(0)} ms, ${plan.unmet.length} wish(es) unmet`
+		);
+	}
 	log(`Demo seeded in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
 	return true;
 }
