@@ -57,6 +57,21 @@ function closest(ctx: Ctx, list: Cand[], dur: number, exclude: number): Cand | n
 
 type Undo = () => void;
 
+/** A playable dance, its level drawn from the crowd's wanted mix half of the time, so that the
+ * search tries the levels the evening needs rather than whatever the catalogue holds most of. */
+function randomDance(ctx: Ctx): number {
+	const { problem, rng } = ctx;
+	if (rng.next() < 0.5) {
+		let u = rng.next();
+		for (let r = 0; r < 5; r++) {
+			u -= problem.levelMix[r];
+			const pool = problem.playableByRank[r];
+			if (u < 0 && pool.length) return pool[rng.int(pool.length)];
+		}
+	}
+	return problem.playable[rng.int(problem.playable.length)];
+}
+
 /** A length for a replacement that moves the slot's end part of the way towards the middle of
  * its window, so that replacements keep the timing rule and re-centre it over time. */
 function wantedDur(ctx: Ctx, s: number, dur: number): number {
@@ -127,7 +142,7 @@ function propose(ctx: Ctx): Undo | null {
 		const a = pickItem(ctx);
 		if (!a || problem.playable.length === 0) return null;
 		const cur = plan[a.s].items[a.i].cand!;
-		const d = problem.playable[rng.int(problem.playable.length)];
+		const d = randomDance(ctx);
 		if (d === cur.dance) return null;
 		const c = closest(ctx, problem.dances[d].cands, wantedDur(ctx, a.s, cur.dur), -1);
 		return c ? replaceWith(ctx, a.s, a.i, c) : null;

@@ -109,6 +109,8 @@ export interface Problem {
 	sections: SectionInfo[];
 	/** Dances with at least one playable pairing, in catalogue order. */
 	playable: number[];
+	/** Playable dances by level rank. */
+	playableByRank: number[][];
 	/** By dance: requests for it, must-plays naming it, lessons teaching it. */
 	requestsOf: RequestInfo[][];
 	mustOf: MustInfo[][];

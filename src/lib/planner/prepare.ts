@@ -162,6 +162,7 @@ export function prepare(
 		eveningS: Math.max(1, eveningS),
 		levelMix,
 		levelCost: levelMix.map((p) => 2 * (1 - p / top)),
+		playableByRank: [0, 1, 2, 3, 4].map((r) => playable.filter((i) => dances[i].rank === r)),
 		requestsOf,
 		mustOf,
 		lessonOf,
