@@ -4,6 +4,7 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { describe, expect, test } from 'vitest';
+import { ACTIONS, PAGES } from '../../tests/page-matrix';
 import { MATRIX } from '../../tests/route-matrix';
 
 const ROOT = join(process.cwd(), 'src', 'routes');
@@ -47,6 +48,33 @@ describe('every API route is in the role matrix', () => {
 				expect(listed, `${method} ${routeId(file)} is missing from tests/route-matrix.ts`).toBe(
 					true
 				);
+			}
+		});
+	}
+});
+
+describe('every page and form action is in the page matrix', () => {
+	for (const file of files.filter((f) => f.endsWith('+page.svelte'))) {
+		test(`page ${routeId(file)}`, () => {
+			expect(
+				PAGES.some((p) => p.route === routeId(file).replace(/^\/$/, '/')),
+				`${routeId(file)} is missing from tests/page-matrix.ts`
+			).toBe(true);
+		});
+	}
+	for (const file of serverModules.filter((f) => f.endsWith('+page.server.ts'))) {
+		const block = /export const actions = \{([\s\S]*?)\} satisfies Actions/.exec(
+			readFileSync(file, 'utf8')
+		)?.[1];
+		if (!block) continue;
+		const names = [...block.matchAll(/^\t(\w+):/gm)].map((m) => m[1]);
+		test(`actions of ${routeId(file)} (${names.join(', ')})`, () => {
+			expect(names.length).toBeGreaterThan(0);
+			for (const name of names) {
+				expect(
+					ACTIONS.some((a) => a.route === routeId(file) && a.action === name),
+					`?/${name} of ${routeId(file)} is missing from tests/page-matrix.ts`
+				).toBe(true);
 			}
 		});
 	}
