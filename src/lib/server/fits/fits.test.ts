@@ -25,6 +25,12 @@ describe('fits for a dance', () => {
 		expect(before.items[0].track.id).toBe(perfect.id);
 		expect(before.items[0].reasons.length).toBeGreaterThan(0);
 		expect(before.items.find((i) => i.track.id === waltz.id)!.score).toBe(0);
+		const fittingOf = (id: number) => before.items.find((i) => i.track.id === id)!.fitting;
+		expect([fittingOf(perfect.id), fittingOf(far.id), fittingOf(waltz.id)]).toEqual([
+			true,
+			false,
+			false
+		]);
 
 		expect(setVerdict({ trackId: far.id, danceId: dance.id, verdict: 'fits' }, user).ok).toBe(true);
 		expect(
@@ -33,6 +39,8 @@ describe('fits for a dance', () => {
 		const after = fitsForDance(dance.id)!;
 		expect(after.items[0].track.id).toBe(far.id);
 		expect(after.items[0].verdict).toBe('fits');
+		expect(after.items[0].fitting).toBe(true);
+		expect(after.items.at(-1)!.fitting).toBe(false);
 		expect(after.items.at(-1)!.track.id).toBe(perfect.id);
 		expect(after.items.at(-1)!.verdict).toBe('does-not-fit');
 	});

@@ -45,9 +45,7 @@ export function lessonMusic(fits: DanceFits, level: Level): LessonMusic {
 	const target = lessonTarget(fits.facts, level, settings);
 	const slow = lessonTracks(fits.facts, fits.tracks, level, fits.verdicts, settings, fitSettings());
 	const byId = new Map(fits.tracks.map((t) => [t.id, t]));
-	// "Fitting" = the ranking's tracks the team has not rejected and the engine scores above 0
-	// (a meter mismatch scores 0).
-	const fitting = fits.items.filter((i) => i.verdict !== 'does-not-fit' && i.score > 0);
+	const fitting = fits.items.filter((i) => i.fitting);
 	return {
 		target,
 		slowEnough: slow.slice(0, SLOW_ENOUGH_SHOWN).map((item) => ({

@@ -18,6 +18,11 @@ export const DEFAULT_FIT_LIMIT = 50;
 export const MAX_FIT_LIMIT = 10_000;
 
 export interface FitJson {
+	/**
+	 * The team says it fits, or (no verdict) the meter matches and the tempo lands inside the
+	 * dance's range as the engine counts it (directly, half or double, within the rate bound).
+	 */
+	fitting: boolean;
 	score: number;
 	verdict: FitItem['verdict'];
 	/** The team's chosen rate and notes, when it has given a verdict. */
@@ -27,8 +32,27 @@ export interface FitJson {
 	reasons: string[];
 }
 
-function fitJson(item: FitItem, stored: StoredVerdict | undefined): FitJson {
+/** Half a BPM of slack, so a rate rounded to 3 decimals still counts as reaching the range. */
+const RANGE_SLACK_BPM = 0.5;
+
+export function isFitting(item: FitItem, range: { bpmMin: number; bpmMax: number }): boolean {
+	if (item.verdict) return item.verdict !== 'does-not-fit';
+	const bpm = item.tempo.effectiveBpm;
+	return (
+		item.score > 0 &&
+		bpm != null &&
+		bpm >= range.bpmMin - RANGE_SLACK_BPM &&
+		bpm <= range.bpmMax + RANGE_SLACK_BPM
+	);
+}
+
+function fitJson(
+	item: FitItem,
+	stored: StoredVerdict | undefined,
+	range: { bpmMin: number; bpmMax: number }
+): FitJson {
 	return {
+		fitting: isFitting(item, range),
 		score: item.score,
 		verdict: item.verdict,
 		decision: stored
@@ -71,7 +95,7 @@ export function fitsForDance(danceId: number, limit = DEFAULT_FIT_LIMIT): DanceF
 		verdicts,
 		items: ranked.map((item) => ({
 			track: byId.get(item.trackId)!,
-			...fitJson(item, verdicts.get(item.trackId))
+			...fitJson(item, verdicts.get(item.trackId), facts)
 		}))
 	};
 }
@@ -90,7 +114,7 @@ export function fitsForTrack(trackId: number, limit = DEFAULT_FIT_LIMIT): TrackF
 	const ranked = rankDancesForTrack(track, rows.map(danceFacts), verdicts, fitSettings(), limit);
 	const items = ranked.map((item) => ({
 		dance: danceJson(byId.get(item.danceId)!),
-		...fitJson(item, verdicts.get(item.danceId))
+		...fitJson(item, verdicts.get(item.danceId), byId.get(item.danceId)!)
 	}));
 	return { track, items };
 }
