@@ -1,5 +1,12 @@
 // The evening planner: greedy construction, then simulated annealing, then the explanation.
-// Pure and deterministic: the same input and seed give the same plan.
+// Pure and deterministic: the same input and seed give the same plan (the iteration budget binds;
+// settings.timeBudgetMs is only a safety net for a machine that is far too busy).
+//
+// Usage from a route: map the evening, catalogue, tracks and fits to PlanInput, then
+//   const result = planEvening({ evening, dances, tracks, fits, requests, mustPlay, neverPlay,
+//     locked, settings, seed });
+// result.entries is the run order (start times in seconds from the evening's start); locked
+// entries keep their startS exactly. checkRunOrder(input, entries) checks a hand-edited order.
 import { anneal } from './anneal';
 import { construct } from './construct';
 import { toEntries } from './explain';
@@ -18,7 +25,7 @@ export { fitIsPlayable } from './prepare';
 
 /** Iterations for an evening of this size: a few hundred tries per movable entry, capped so a
  * four-hour evening plans in well under the benchmark's 300 ms on a two-core machine. */
-export function defaultIterations(plan: Plan): number {
+function defaultIterations(plan: Plan): number {
 	let movable = 0;
 	for (const s of plan) if (s.kind === 'dance') movable += s.items.length;
 	return Math.min(12_000, Math.max(2_000, movable * 300));

@@ -51,7 +51,8 @@ function orderLocks(problem: Problem, locks: LockedEntry[]): LockedEntry[] {
 	const kept: LockedEntry[] = [];
 	let end = -Infinity;
 	for (const l of sorted) {
-		if (l.startS < end) {
+		// A hair of tolerance: a lock that starts as the one before ends, to rounding, does not overlap.
+		if (l.startS < end - 1e-6) {
 			problem.inputViolations.push(
 				`The locked entry at position ${l.position + 1} overlaps the locked entry before it, so it was left out.`
 			);
@@ -105,9 +106,8 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 		for (;;) {
 			const lock = li < lockSlots.length ? lockSlots[li] : null;
 			if (lock && lock.start < sec.endS) {
-				if (lock.start < cursor - gapS - 1e-6 && slots.length > 0) {
-					// Starts inside what came before (only locks can): keep it, nothing to fill.
-				} else if (lock.start - gapS > cursor) {
+				// Room before the lock gets a slot; a lock right after the one before gets none.
+				if (lock.start - gapS > cursor) {
 					const hi = lock.start - gapS;
 					slots.push({
 						kind,
