@@ -234,3 +234,59 @@ test('bulk edit: select the shown rows, set an intro, mark them for a dance, fil
 	await page.getByRole('search').getByLabel('Verdict').selectOption('does-not-fit');
 	await expect(grid(page).getByTestId('track-row')).toHaveCount(0);
 });
+
+test('over HTTP: an oversized upload is 413, a hostile name stays text, audio serves ranges', async ({
+	playwright
+}) => {
+	const request = await playwright.request.newContext({ baseURL: BASE });
+	await signInApi(request, 'dj');
+	const analysis = JSON.stringify({
+		bpm: 120,
+		offsetS: 0,
+		confidence: 0.5,
+		source: 'detected',
+		meter: 4
+	});
+	// The e2e server runs with MAX_UPLOAD_MB=5 (scripts/e2e-server.ts).
+	const big = await request.post('/api/tracks', {
+		headers: { origin: BASE },
+		multipart: {
+			file: { name: 'big.wav', mimeType: 'audio/wav', buffer: Buffer.alloc(5.5 * 1024 * 1024, 1) },
+			analysis
+		}
+	});
+	expect(big.status()).toBe(413);
+	expect((await big.json()).error).toMatch(/5 MB/);
+
+	const song = generateSong({ bpm: 111, durationS: 6, seed: 21 });
+	const hostile = await request.post('/api/tracks', {
+		headers: { origin: BASE },
+		multipart: {
+			file: {
+				name: '../../etc/\u202Epasswd\u0007.wav',
+				mimeType: 'audio/wav',
+				buffer: Buffer.from(encodeWav(song.samples, song.sampleRate))
+			},
+			analysis
+		}
+	});
+	expect(hostile.status()).toBe(201);
+	const { track } = (await hostile.json()) as { track: { id: number; originalName: string } };
+	expect(track.originalName).toBe('passwd.wav');
+
+	const part = await request.get(`/api/tracks/${track.id}/audio`, {
+		headers: { range: 'bytes=0-3' }
+	});
+	expect(part.status()).toBe(206);
+	expect(part.headers()['content-disposition']).toBe(`inline; filename="track-${track.id}.wav"`);
+	expect(part.headers()['x-content-type-options']).toBe('nosniff');
+	expect((await part.body()).toString('latin1')).toBe('RIFF');
+	const beyond = await request.get(`/api/tracks/${track.id}/audio`, {
+		headers: { range: 'bytes=99999999-' }
+	});
+	expect(beyond.status()).toBe(416);
+	expect(
+		(await request.delete(`/api/tracks/${track.id}`, { headers: { origin: BASE } })).status()
+	).toBe(204);
+	await request.dispose();
+});
