@@ -123,15 +123,26 @@ export const entryInput = z
 			.min(0)
 			.max(6 * 3600)
 			.default(0),
+		/** For a locked entry: the start (seconds from the evening's start) it is pinned to. */
+		startS: z
+			.number()
+			.min(0)
+			.max(24 * 3600)
+			.optional(),
 		locked: z.boolean().default(false),
 		text: plainText(500, 'text').default(''),
 		reasons: z.array(z.string().max(300)).max(30).default([])
+	})
+	.extend({
+		/** The planner's name for `text` (a teach's or break's title): a plan saves as it came. */
+		title: plainText(500, 'title').optional()
 	})
 	.superRefine((e, ctx) => {
 		if (e.kind === 'dance' && (!e.danceId || !e.trackId)) {
 			ctx.addIssue({ code: 'custom', message: 'A dance entry needs a dance and a track.' });
 		}
-	});
+	})
+	.transform(({ title, ...e }) => ({ ...e, text: e.text || title || '' }));
 export type EntryInput = z.infer<typeof entryInput>;
 
 export const runOrderSave = z.object({

@@ -82,13 +82,20 @@ export class RunOrderDraft {
 	private sections: () => SectionStart[];
 	private gapS: () => number;
 	/** Start of every entry in seconds from the evening's start, as a save would compute it. */
-	starts = $derived.by(() =>
-		recomputeStarts(
+	starts = $derived.by(() => this.computeStarts());
+
+	private computeStarts(): number[] {
+		return recomputeStarts(
 			this.entries.map((e) => ({ ...e, startS: e.pinS })),
 			this.sections(),
 			this.gapS()
-		)
-	);
+		);
+	}
+
+	/** Where entry `index` starts now, computed afresh (not from a derived value mid-update). */
+	private startOf(index: number): number | null {
+		return this.computeStarts()[index] ?? null;
+	}
 
 	constructor(initial: EntryData[], sections: () => SectionStart[], gapS: () => number) {
 		this.sections = sections;
@@ -114,7 +121,7 @@ export class RunOrderDraft {
 		e.sectionId = sectionAfterMove(this.entries, at);
 		// A moved lock is pinned again where it now lands.
 		e.pinS = null;
-		if (e.locked) e.pinS = this.starts[at] ?? null;
+		if (e.locked) e.pinS = this.startOf(at);
 	}
 
 	move(index: number, by: -1 | 1) {
@@ -144,8 +151,9 @@ export class RunOrderDraft {
 
 	toggleLock(index: number) {
 		const e = this.entries[index];
+		const start = this.startOf(index);
 		e.locked = !e.locked;
-		e.pinS = e.locked ? (this.starts[index] ?? null) : null;
+		e.pinS = e.locked ? start : null;
 		this.dirty = true;
 	}
 

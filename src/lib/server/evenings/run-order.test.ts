@@ -6,6 +6,7 @@ import { loadEvening } from './load';
 import { entriesOf, planAndSave, planFor } from './plan';
 import { planInputFor } from './plan-input';
 import { saveRunOrder } from './run-order';
+import { runOrderSave } from '../../schemas/evening';
 import { seedLike } from './test-fixture';
 import { updateEvening } from './write';
 
@@ -108,6 +109,21 @@ describe('run-order save', () => {
 		// After reloading (the new version) Bob's save goes through.
 		saveRunOrder(1, after.runOrderVersion, [...mine, ...theirs]);
 		expect(loadEvening(1)!.entries.map((x) => x.text)).toEqual(['Alice', 'Bob']);
+	});
+
+	test('a locked entry sent through the schema keeps its pinned start', () => {
+		const v = loadEvening(1)!.runOrderVersion;
+		const body = runOrderSave.parse({
+			version: v,
+			entries: [
+				{ kind: 'announcement', durationS: 60, text: 'Welcome' },
+				{ kind: 'break', durationS: 300, locked: true, startS: 900, title: 'Water' }
+			]
+		});
+		saveRunOrder(1, v, body.entries);
+		const saved = loadEvening(1)!.entries;
+		// Unpinned it would start at 60 + 15 = 75 s; pinned, at 900 s. The planner's title is the text.
+		expect(saved[1]).toMatchObject({ startS: 900, text: 'Water', locked: true });
 	});
 
 	test('unknown references and tracks the team refused are 422', () => {
