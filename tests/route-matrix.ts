@@ -82,9 +82,9 @@ export const MATRIX: MatrixRow[] = [
 	// Sharing an evening (issue 5, "Getting it to people"): exports are readEvenings (a dancer
 	// only for published evenings: demo evening 1 is published); e-mail and publishing are
 	// organisers'. Mutations use an empty body (422) or an unknown id (404), so nothing changes.
-	// Not in this table, because they are pages, not API routes: the public page /e/<token>, its
-	// poster and its request form (a form action, ?/request) need no sign-in and are tested in
-	// tests/share.spec.ts (signed out: page, QR, no private data, request stored, 404 after
+	// Not in this table, because they are pages, not API routes (tests/page-matrix.ts lists them
+	// by role): the public page /e/<token>, its poster and its request form (a form action,
+	// ?/request) need no sign-in and are tested in tests/share.spec.ts (signed out: page, QR, no private data, request stored, 404 after
 	// unpublishing) and src/lib/server/share/share.test.ts; the print page /evenings/[id]/print
 	// takes the exports' rights (requireRight 'readEvenings', checked by route-coverage.test.ts).
 	...(['csv', 'm3u8', 'pdf', 'ics'] as const).map((ext): MatrixRow => ({
