@@ -135,7 +135,15 @@ export function toEntries(problem: Problem, plan: Plan): PlanEntry[] {
 		return {
 			position: index,
 			kind: item.kind,
-			danceId: c && c.dance >= 0 ? problem.dances[c.dance].id : (lock?.data.danceId ?? null),
+			// A teach or walkthrough names the lesson's dance, for the run sheet.
+			danceId:
+				c && c.dance >= 0
+					? problem.dances[c.dance].id
+					: lock
+						? (lock.data.danceId ?? null)
+						: (item.kind === 'teach' || item.kind === 'walkthrough') && lessonDance
+							? lessonDance.id
+							: null,
 			trackId: c && c.track >= 0 ? problem.tracks[c.track].id : (lock?.data.trackId ?? null),
 			startS: start,
 			durationS: item.dur,

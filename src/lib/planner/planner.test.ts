@@ -88,8 +88,8 @@ describe('worked examples of the timing (plain arithmetic)', () => {
 			startS: 2460
 		});
 		expect(slow.durationS).toBeCloseTo(240, 9);
-		expect(walk).toMatchObject({ kind: 'walkthrough', startS: 2265, durationS: 180 });
-		expect(teach).toMatchObject({ kind: 'teach', startS: 0, durationS: 2250 });
+		expect(walk).toMatchObject({ kind: 'walkthrough', danceId: 1, startS: 2265, durationS: 180 });
+		expect(teach).toMatchObject({ kind: 'teach', danceId: 1, startS: 0, durationS: 2250 });
 		expect(slow.reasons).toContain('taught in the lesson at 0.85×');
 		// And again later at full tempo, to the other track (no track twice).
 		const again = plan.entries.filter((e) => e.danceId === 1 && e.startS >= 2700);
