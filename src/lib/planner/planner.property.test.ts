@@ -108,7 +108,7 @@ describe('planner properties over random evenings', () => {
 					expect(kept[0].trackId).toBe(l.entry.trackId);
 				}
 			}),
-			{ numRuns: runs(120), seed: seed(20261205) }
+			{ numRuns: runs(200), seed: seed(20261205) }
 		);
 	});
 
@@ -124,7 +124,7 @@ describe('planner properties over random evenings', () => {
 				expect(replanned.violations).toEqual([]);
 				expect(checkRunOrder({ ...input, locked }, replanned.entries)).toEqual([]);
 			}),
-			{ numRuns: runs(40), seed: seed(5122026) }
+			{ numRuns: runs(60), seed: seed(5122026) }
 		);
 	});
 });
