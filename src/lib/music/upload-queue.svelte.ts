@@ -153,7 +153,7 @@ export class UploadQueue {
 			await new Promise((r) => setTimeout(r, 0));
 			const a = await this.deps.analyse(file, controller.signal);
 			controller.signal.throwIfAborted();
-			this.item(key).bpm = a.tempo.bpm;
+			this.item(key).bpm = analysisBody(a).bpm;
 			this.item(key).confidence = a.tempo.confidence;
 			Object.assign(this.item(key), { state: 'uploading', progress: 0, message: 'Uploading…' });
 			const form = new FormData();
@@ -191,12 +191,15 @@ export class UploadQueue {
 
 /** What POST /api/tracks expects beside the file (src/lib/music/track-schemas.ts). */
 export function analysisBody(a: FileAnalysis) {
+	// The file's own BPM tag is preferred only when the measurement agrees with it (within 4 %):
+	// then it is the producer's exact figure; otherwise the measurement stands (issue 3).
+	const tag = a.tempo.tagAgrees && a.tags.tagBpm !== null ? a.tags.tagBpm : null;
 	return {
-		bpm: a.tempo.bpm,
+		bpm: tag ?? a.tempo.bpm,
 		rawBpm: a.tempo.rawBpm,
 		offsetS: a.tempo.offsetS,
 		confidence: a.tempo.confidence,
-		source: a.tempo.source,
+		source: tag === null ? a.tempo.source : ('tag' as const),
 		meter: a.meter,
 		candidates: a.tempo.candidates.slice(0, 16),
 		title: a.tags.title ?? undefined,

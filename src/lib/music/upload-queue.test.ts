@@ -3,7 +3,12 @@
 import { describe, expect, test } from 'vitest';
 import type { FileAnalysis } from '../tempo/analyse-browser';
 import type { TrackJson } from './track-types';
-import { UploadQueue, type QueueDeps, type UploadAnswer } from './upload-queue.svelte';
+import {
+	analysisBody,
+	UploadQueue,
+	type QueueDeps,
+	type UploadAnswer
+} from './upload-queue.svelte';
 
 const analysis = (bpm: number): FileAnalysis => ({
 	tags: { title: null, artist: null, album: null, durationS: 30, tagBpm: null, format: 'WAVE PCM' },
@@ -13,7 +18,8 @@ const analysis = (bpm: number): FileAnalysis => ({
 		offsetS: 0.1,
 		confidence: 0.9,
 		candidates: [{ bpm, score: 1 }],
-		source: 'detected'
+		source: 'detected',
+		tagAgrees: false
 	},
 	meter: 4,
 	ms: 5,
@@ -114,5 +120,23 @@ describe('UploadQueue', () => {
 		expect(h.queue.done).toBe(1);
 		expect(h.queue.secondsLeft).not.toBeNull();
 		expect(h.queue.secondsLeft).toBeGreaterThanOrEqual(0);
+	});
+});
+
+describe('analysisBody', () => {
+	test('the BPM tag is used, as source "tag", only when the measurement agrees with it', () => {
+		const measured = analysis(127.4);
+		const agreeing = {
+			...measured,
+			tags: { ...measured.tags, tagBpm: 128 },
+			tempo: { ...measured.tempo, tagAgrees: true }
+		};
+		expect(analysisBody(agreeing)).toMatchObject({ bpm: 128, rawBpm: 127.4, source: 'tag' });
+		const disagreeing = {
+			...agreeing,
+			tags: { ...agreeing.tags, tagBpm: 64 },
+			tempo: measured.tempo
+		};
+		expect(analysisBody(disagreeing)).toMatchObject({ bpm: 127.4, source: 'detected' });
 	});
 });
