@@ -143,7 +143,7 @@ function time(label: string, f: () => unknown, before?: () => void): [number, nu
 	const w = stats(wall);
 	const c = stats(cpu);
 	console.log(
-		`${label.padEnd(48)} wall median ${w.median.toFixed(2)} p95 ${w.p95.toFixed(2)} ms · cpu median ${c.median.toFixed(2)} p95 ${c.p95.toFixed(2)} ms`
+		`${label.padEnd(56)} wall median ${w.median.toFixed(2)} p95 ${w.p95.toFixed(2)} ms · cpu median ${c.median.toFixed(2)} p95 ${c.p95.toFixed(2)} ms`
 	);
 	return [w.p95, c.p95];
 }
@@ -169,7 +169,26 @@ const blindEdit = () =>
 	db.$client
 		.prepare('UPDATE tracks SET version = version + 1 WHERE id = ?')
 		.run(1 + (flip++ % 100));
-const worst = { cached: [0, 0], verdict: [0, 0], edit: [0, 0], reread: [0, 0] };
+// A delete and an upload between rankings: the deleted id is found from the ids alone.
+let spare = TRACKS + 1;
+const deleteAndAdd = () => {
+	const victim = db.$client.prepare('SELECT max(id) FROM tracks').pluck().get() as number;
+	db.$client.prepare('DELETE FROM tracks WHERE id = ?').run(victim);
+	const sha = (spare++).toString(16).padStart(64, '0');
+	db.$client
+		.prepare(
+			`INSERT INTO tracks (title, duration_s, bpm, mime_type, file_size, sha256, storage_key)
+			VALUES ('Invented Late Song', 200, 118, 'audio/mpeg', 1, ?, ?)`
+		)
+		.run(sha, `audio/${sha}.mp3`);
+};
+const worst = {
+	cached: [0, 0],
+	verdict: [0, 0],
+	edit: [0, 0],
+	deleteAdd: [0, 0],
+	reread: [0, 0]
+};
 const keep = (key: keyof typeof worst, [wall, cpu]: [number, number]) => {
 	worst[key] = [Math.max(worst[key][0], wall), Math.max(worst[key][1], cpu)];
 };
@@ -180,6 +199,7 @@ for (const id of danceIds) {
 		keep('cached', time(`${label}, tracks cached`, run));
 		keep('verdict', time(`${label}, after a verdict`, run, verdictWrite));
 		keep('edit', time(`${label}, after a track edit`, run, trackEdit));
+		keep('deleteAdd', time(`${label}, after a delete and an upload`, run, deleteAndAdd));
 		keep('reread', time(`${label}, all tracks read again`, run, blindEdit));
 	}
 }
@@ -189,6 +209,7 @@ const CASES = {
 	cached: 'tracks cached',
 	verdict: 'after a verdict',
 	edit: 'after a track edit (changed rows read)',
+	deleteAdd: 'after a delete and an upload',
 	reread: 'all tracks read again'
 };
 for (const [key, words] of Object.entries(CASES)) {

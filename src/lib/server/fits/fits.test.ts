@@ -123,9 +123,12 @@ describe('the cached track facts', () => {
 				.facts.map((x) => x.id)
 				.sort()
 		).toEqual([a.id, b.id, c.id].sort());
+		const kept = trackFacts().byId;
 		t.db.delete(tracks).where(eq(tracks.id, b.id)).run();
 		expect(trackFacts().byId.has(b.id)).toBe(false);
 		expect(trackFacts().facts).toHaveLength(2);
+		// Brought up to date in place, not read again from scratch.
+		expect(trackFacts().byId).toBe(kept);
 	});
 
 	test('an edit the time window misses is still caught by the version sum', () => {

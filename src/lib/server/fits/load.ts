@@ -89,9 +89,9 @@ function fullRead(client: Client, now: string, signature: Signature): TrackCache
 }
 
 /**
- * Reads only the rows edited or added since the cache was made. The result must match the new
- * signature exactly (count and version sum): a delete, or an edit the time window missed, fails
- * that check and the caller reads everything again.
+ * Reads only the rows edited or added since the cache was made, and drops deleted ones. The
+ * result must match the new signature exactly (count and version sum): an edit the time window
+ * missed fails that check and the caller reads everything again.
  */
 function patch(client: Client, cache: TrackCache, signature: Signature): boolean {
 	const [, maxId, , maxUpdated] = cache.signature;
@@ -101,6 +101,16 @@ function patch(client: Client, cache: TrackCache, signature: Signature): boolean
 		versionSum += r[9] - (cache.versions.get(r[0]) ?? 0);
 		cache.versions.set(r[0], r[9]);
 		cache.byId.set(r[0], factsOf(r));
+	}
+	if (cache.byId.size > signature[0]) {
+		// Some tracks were deleted: the ids alone (an index scan) say which.
+		const live = new Set(client.prepare('SELECT id FROM tracks').pluck().all() as number[]);
+		for (const id of [...cache.byId.keys()]) {
+			if (live.has(id)) continue;
+			versionSum -= cache.versions.get(id) ?? 0;
+			cache.versions.delete(id);
+			cache.byId.delete(id);
+		}
 	}
 	if (cache.byId.size !== signature[0] || versionSum !== signature[2]) return false;
 	cache.facts = [...cache.byId.values()];
