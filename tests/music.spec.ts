@@ -290,3 +290,16 @@ test('over HTTP: an oversized upload is 413, a hostile name stays text, audio se
 	).toBe(204);
 	await request.dispose();
 });
+
+test('an instructor reads the music but cannot change it', async ({ page }) => {
+	await signIn(page, 'instructor');
+	await page.goto('/music');
+	await expect(page.getByTestId('library-count')).toContainText('tracks shown');
+	await expect(page.getByTestId('drop-zone')).toHaveCount(0);
+	await expect(grid(page).getByRole('button', { name: /Double the tempo/ })).toHaveCount(0);
+	await grid(page).getByTestId('track-row').first().getByRole('link').click();
+	await expect(page.getByTestId('player')).toBeVisible();
+	await expect(page.getByRole('button', { name: 'Tap', exact: true })).toHaveCount(0);
+	await expect(page.getByRole('button', { name: 'Save the facts' })).toHaveCount(0);
+	await expect(page.getByTestId('track-dance-fits-slot')).toBeVisible();
+});
