@@ -51,10 +51,12 @@ interface Scratch {
 	trackUse: Int32Array;
 	trackStamp: Int32Array;
 	gen: number;
-	occDance: number[];
-	occStart: number[];
-	occRate: number[];
-	occTrack: number[];
+	/** Plays seen in this evaluation: the first `occ` slots of each array are in use. */
+	occ: number;
+	occDance: Int32Array;
+	occStart: Float64Array;
+	occRate: Float64Array;
+	occTrack: Int32Array;
 	buf: number[];
 	terms: ObjectiveTerms;
 	weighted: ObjectiveTerms;
@@ -65,6 +67,15 @@ interface Scratch {
 
 const scratches = new WeakMap<Problem, Scratch>();
 
+function growOcc(sc: Scratch): void {
+	const n = sc.occDance.length * 2;
+	const grow = <T extends Int32Array | Float64Array>(a: T, b: T): T => (b.set(a), b);
+	sc.occDance = grow(sc.occDance, new Int32Array(n));
+	sc.occStart = grow(sc.occStart, new Float64Array(n));
+	sc.occRate = grow(sc.occRate, new Float64Array(n));
+	sc.occTrack = grow(sc.occTrack, new Int32Array(n));
+}
+
 function scratchFor(problem: Problem): Scratch {
 	let sc = scratches.get(problem);
 	if (!sc) {
@@ -74,10 +85,11 @@ function scratchFor(problem: Problem): Scratch {
 			trackUse: new Int32Array(problem.tracks.length),
 			trackStamp: new Int32Array(problem.tracks.length),
 			gen: 0,
-			occDance: [],
-			occStart: [],
-			occRate: [],
-			occTrack: [],
+			occ: 0,
+			occDance: new Int32Array(64),
+			occStart: new Float64Array(64),
+			occRate: new Float64Array(64),
+			occTrack: new Int32Array(64),
 			buf: [],
 			terms: zeroTerms(),
 			weighted: zeroTerms(),
@@ -88,17 +100,14 @@ function scratchFor(problem: Problem): Scratch {
 		scratches.set(problem, sc);
 	}
 	sc.gen++;
-	sc.occDance.length = 0;
-	sc.occStart.length = 0;
-	sc.occRate.length = 0;
-	sc.occTrack.length = 0;
+	sc.occ = 0;
 	return sc;
 }
 
 /** Starts of the social plays of a dance (to a given track, if any), into `out`. */
 function startsOf(sc: Scratch, dance: number, track: number, out: number[]): number[] {
 	out.length = 0;
-	for (let i = 0; i < sc.occDance.length; i++) {
+	for (let i = 0; i < sc.occ; i++) {
 		if (
 			sc.occDance[i] === dance &&
 			sc.occStart[i] >= 0 &&
@@ -147,6 +156,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 	let lastEnd = 0;
 	for (const slot of plan) {
 		sizeStretch(problem, slot);
+		const lastSlot = slot.section >= 0 && problem.sections[slot.section].kind === 'last-dance';
 		let t = slot.start;
 		const items = slot.items;
 		for (let k = 0; k < items.length; k++) {
@@ -213,11 +223,13 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 						hardCount++;
 					}
 				}
-				sc.occDance.push(c.dance);
-				sc.occStart.push(it.lesson ? -1 : start);
-				sc.occRate.push(c.rate);
-				sc.occTrack.push(c.track);
-				if (slot.section >= 0 && problem.sections[slot.section].kind === 'last-dance') {
+				if (sc.occ === sc.occDance.length) growOcc(sc);
+				const o = sc.occ++;
+				sc.occDance[o] = c.dance;
+				sc.occStart[o] = it.lesson ? -1 : start;
+				sc.occRate[o] = c.rate;
+				sc.occTrack[o] = c.track;
+				if (lastSlot) {
 					lastInSection.set(slot.section, it.locked ? null : c);
 				}
 			}
@@ -261,7 +273,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 	}
 	for (const l of problem.lessons) {
 		const delays: number[] = [];
-		for (let i = 0; i < sc.occDance.length; i++) {
+		for (let i = 0; i < sc.occ; i++) {
 			if (sc.occDance[i] !== l.dance || sc.occStart[i] < l.endS - EPS) continue;
 			if (Math.abs(sc.occRate[i] - 1) <= s.fullTempoTolerance + EPS)
 				delays.push(sc.occStart[i] - l.endS);
