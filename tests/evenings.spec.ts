@@ -209,3 +209,94 @@ test('the desk view shows the current entry, the section time left and the sound
 	await page.getByRole('button', { name: 'Follow the clock' }).click();
 	await expect(now).toHaveText(before!);
 });
+
+test('the evenings API: create, read, change and delete, with clear refusals', async () => {
+	const api = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(api, 'organiser');
+	const body = {
+		title: 'Hollyhock Hop',
+		startsAt: '2027-02-05T19:00:00Z',
+		endsAt: '2027-02-05T22:00:00Z',
+		crowd: 'experienced',
+		sections: [
+			{ kind: 'open-floor', startsAt: '2027-02-05T19:00:00Z', endsAt: '2027-02-05T21:50:00Z' },
+			{ kind: 'last-dance', startsAt: '2027-02-05T21:50:00Z', endsAt: '2027-02-05T22:00:00Z' }
+		]
+	};
+	const post = (data: unknown) => api.post('/api/evenings', { data, headers });
+	const badDate = await post({ ...body, startsAt: '5 February' });
+	expect(badDate.status()).toBe(422);
+	expect((await badDate.json()).error).toMatch(/startsAt/);
+	const outside = structuredClone(body);
+	outside.sections[1].endsAt = '2027-02-05T22:30:00Z';
+	expect((await post(outside)).status()).toBe(422);
+	const overlap = structuredClone(body);
+	overlap.sections[1].startsAt = '2027-02-05T21:00:00Z';
+	const refused = await post(overlap);
+	expect(refused.status()).toBe(422);
+	expect((await refused.json()).error).toMatch(/overlaps/);
+	const notJson = await api.post('/api/evenings', {
+		data: 'title=x',
+		headers: { ...headers, 'content-type': 'text/plain' }
+	});
+	expect(notJson.status()).toBe(415);
+
+	const created = await post(body);
+	expect(created.status()).toBe(201);
+	const evening = await created.json();
+	expect(evening).toMatchObject({
+		title: 'Hollyhock Hop',
+		startsAt: '2027-02-05T19:00:00.000Z',
+		endsAt: '2027-02-05T22:00:00.000Z',
+		status: 'draft',
+		runOrderVersion: 1,
+		entries: []
+	});
+	expect(evening.sections).toHaveLength(2);
+	const list = await (await api.get('/api/evenings')).json();
+	expect(list.items.some((e: { id: number }) => e.id === evening.id)).toBe(true);
+	const patched = await api.patch(`/api/evenings/${evening.id}`, {
+		data: { title: 'Hollyhock Hop II', version: evening.version },
+		headers
+	});
+	expect(patched.status()).toBe(200);
+	expect((await patched.json()).title).toBe('Hollyhock Hop II');
+	const stale = await api.patch(`/api/evenings/${evening.id}`, {
+		data: { title: 'Lost edit', version: evening.version },
+		headers
+	});
+	expect(stale.status()).toBe(409);
+	expect((await api.delete(`/api/evenings/${evening.id}`, { headers })).status()).toBe(204);
+	expect((await api.get(`/api/evenings/${evening.id}`)).status()).toBe(404);
+	await api.dispose();
+});
+
+test('the organiser creates, edits and deletes an evening through the forms', async ({ page }) => {
+	await signIn(page, 'organiser');
+	await page.goto('/evenings');
+	await page.getByRole('link', { name: 'New evening' }).click();
+	await page.getByLabel('Title', { exact: true }).fill('Thistledown Social');
+	await page.getByLabel('Date').fill('2027-03-12');
+	await page.getByRole('button', { name: 'Create the evening' }).click();
+	await expect(page.getByRole('heading', { name: 'Thistledown Social' })).toBeVisible();
+	await expect(page.getByText(/Friday,? 12 March 2027, 19:30–23:00/)).toBeVisible();
+	// The outline's six sections came along.
+	await expect(page.locator('#sections-h + ol > li')).toHaveCount(6);
+
+	await page.getByRole('link', { name: 'Edit the evening' }).click();
+	// Section 2 made to start inside the lesson: refused, with the typed values kept.
+	await page.getByLabel('Section 2: from').fill('20:00');
+	await page.getByRole('button', { name: 'Save the evening' }).click();
+	await expect(page.getByRole('alert')).toContainText('overlaps');
+	await expect(page.getByLabel('Section 2: from')).toHaveValue('20:00');
+	await page.getByLabel('Section 2: from').fill('20:10');
+	await page.getByLabel('Notes').fill('Bring a friend.');
+	await page.getByRole('button', { name: 'Save the evening' }).click();
+	await expect(page.getByText('Bring a friend.')).toBeVisible();
+
+	await page.getByRole('link', { name: 'Edit the evening' }).click();
+	await page.getByRole('button', { name: 'Delete…' }).click();
+	await page.getByRole('button', { name: 'Yes, delete it' }).click();
+	await expect(page).toHaveURL(/\/evenings$/);
+	await expect(page.getByText('Thistledown Social')).toHaveCount(0);
+});

@@ -33,7 +33,7 @@ export function clock(ms: number, timeZone: string): string {
 	}).format(new Date(ms));
 }
 
-/** "Friday 11 December 2026" in the club's zone. */
+/** "Friday, 11 December 2026" (as Intl writes it) in the club's zone. */
 export function longDate(ms: number, timeZone: string): string {
 	return new Intl.DateTimeFormat('en-GB', {
 		timeZone,
