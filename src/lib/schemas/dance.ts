@@ -49,11 +49,20 @@ export const danceFields = z.object({
 		.enum(['left', 'right'], { message: 'Turn is left, right or none.' })
 		.nullable()
 		.default(null),
-	tags: z.array(tagSchema).max(50, 'At most 50 tags.').default([]),
-	restarts: z.array(restartSchema).max(50, 'At most 50 restarts.').default([]),
-	notes: z.string().max(4000, 'Keep the notes under 4,000 characters.').default(''),
+	tags: z
+		.array(tagSchema, { message: 'Send tags as a list.' })
+		.max(50, 'At most 50 tags.')
+		.default([]),
+	restarts: z
+		.array(restartSchema, { message: 'Send restarts as a list.' })
+		.max(50, 'At most 50 restarts.')
+		.default([]),
+	notes: z
+		.string({ message: 'Send the notes as text.' })
+		.max(4000, 'Keep the notes under 4,000 characters.')
+		.default(''),
 	choreographer: z
-		.string()
+		.string({ message: 'Send the choreographer as text.' })
 		.trim()
 		.max(120, 'Keep the choreographer under 120 characters.')
 		.refine(noControl, 'Remove control characters.')
@@ -94,7 +103,10 @@ export type DanceInput = z.infer<typeof danceSchema>;
 
 /** PATCH: any subset of the fields, with the version the client last saw. */
 export const dancePatchSchema = danceFields.partial().extend({
-	version: z.number({ message: 'Send the version you last saw.' }).int().positive()
+	version: z
+		.number({ message: 'Send the version you last saw.' })
+		.int('The version is a whole number.')
+		.positive('The version is above 0.')
 });
 export type DancePatch = z.infer<typeof dancePatchSchema>;
 
@@ -111,25 +123,34 @@ export const danceFilterSchema = z.object({
 });
 export type DanceFilter = z.infer<typeof danceFilterSchema>;
 
+const anId = (what: string) =>
+	z
+		.number({ message: `Send the ${what} id as a number.` })
+		.int(`A ${what} id is a whole number.`)
+		.positive(`A ${what} id is above 0.`);
+
 export const fitVerdictSchema = z.object({
-	trackId: z.number().int().positive(),
-	danceId: z.number().int().positive(),
+	trackId: anId('track'),
+	danceId: anId('dance'),
 	verdict: z.enum(VERDICTS, { message: 'The verdict is fits, fits-at-rate or does-not-fit.' }),
 	// Past these the music sounds wrong (the fits table allows 0.25–4, far wider).
 	rate: z
-		.number()
+		.number({ message: 'Send the rate as a number, e.g. 0.95.' })
 		.min(0.5, 'A rate is at least 0.5.')
 		.max(2, 'A rate is at most 2.')
 		.nullable()
 		.optional(),
-	notes: z.string().max(1000, 'Keep the notes under 1,000 characters.').optional()
+	notes: z
+		.string({ message: 'Send the notes as text.' })
+		.max(1000, 'Keep the notes under 1,000 characters.')
+		.optional()
 });
 export type FitVerdictInput = z.infer<typeof fitVerdictSchema>;
 
 /** Several tracks marked for one dance in one step (the music table's selection). */
 export const fitVerdictBulkSchema = fitVerdictSchema.omit({ trackId: true }).extend({
 	trackIds: z
-		.array(z.number().int().positive())
+		.array(anId('track'), { message: 'Send trackIds as a list of numbers.' })
 		.min(1, 'Choose at least one track.')
 		.max(500, 'Mark at most 500 tracks at a time.')
 		.refine((ids) => new Set(ids).size === ids.length, 'A track is listed twice.')

@@ -23,7 +23,10 @@ const shape = ({
  */
 export const PUT = (async (event) => {
 	const me = requireRight(event, 'fits');
-	const body = await readJson(event.request, z.record(z.string(), z.unknown()));
+	const body = await readJson(
+		event.request,
+		z.record(z.string(), z.unknown(), { message: 'Send a JSON object.' })
+	);
 	if (!body.ok) return body.response;
 	if ('trackIds' in body.data) {
 		const bulk = fitVerdictBulkSchema.safeParse(body.data);
