@@ -300,3 +300,43 @@ test('the organiser creates, edits and deletes an evening through the forms', as
 	await expect(page).toHaveURL(/\/evenings$/);
 	await expect(page.getByText('Thistledown Social')).toHaveCount(0);
 });
+
+test('swap a track for another that fits the same dance, insert and remove entries', async ({
+	page
+}) => {
+	const api = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(api, 'organiser');
+	await ensureRunOrder(api);
+	await api.dispose();
+	await signIn(page, 'organiser');
+	await page.goto('/evenings/1');
+	const rows = page.getByTestId('entry');
+	const count = await rows.count();
+	const dance = rows.filter({ has: page.getByRole('button', { name: /^Swap track/ }) }).nth(2);
+	const before = await dance.locator('p').nth(1).textContent();
+	await dance.getByRole('button', { name: /^Swap track/ }).click();
+	const offers = page.getByRole('button', { name: /^Use / });
+	await expect(offers.first()).toBeVisible();
+	const choice = (await offers.first().textContent())!.replace(/^Use /, '');
+	await offers.first().click();
+	await expect(dance.locator('p').nth(1)).not.toHaveText(before!);
+	await expect(dance.locator('p').nth(1)).toContainText(choice);
+	await expect(dance).toContainText('track chosen by hand from the fit ranking');
+
+	// An announcement added at the end, then a removal: the count follows.
+	await page.getByLabel('Kind').selectOption('announcement');
+	await page.getByLabel('What to say').fill('Raffle at the break');
+	await page.getByRole('button', { name: 'Add', exact: true }).click();
+	await expect(rows).toHaveCount(count + 1);
+	await expect(rows.last()).toContainText('Announcement: Raffle at the break');
+	await rows
+		.first()
+		.getByRole('button', { name: /^Remove/ })
+		.click();
+	await expect(rows).toHaveCount(count);
+	await page.getByRole('button', { name: 'Save the run order' }).click();
+	await expect(page.getByTestId('run-order-notice')).toContainText('Saved');
+	await page.reload();
+	await expect(rows.last()).toContainText('Announcement: Raffle at the break');
+	await expect(page.getByText(choice).first()).toBeVisible();
+});
