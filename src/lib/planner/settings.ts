@@ -8,7 +8,7 @@ export const DEFAULT_WEIGHTS: PlanWeights = {
 	energy: 1,
 	rhythm: 1,
 	phrasing: 1,
-	requests: 3,
+	requests: 5,
 	mustPlay: 5,
 	lastDance: 2,
 	reprise: 1,
