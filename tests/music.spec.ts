@@ -299,6 +299,8 @@ test('an instructor reads the music but cannot change it', async ({ page }) => {
 	await expect(grid(page).getByRole('button', { name: /Double the tempo/ })).toHaveCount(0);
 	await grid(page).getByTestId('track-row').first().getByRole('link').click();
 	await expect(page.getByTestId('player')).toBeVisible();
+	// The waveform is decoded in the browser from the stored audio.
+	await expect(page.getByTestId('waveform')).toBeVisible();
 	await expect(page.getByRole('button', { name: 'Tap', exact: true })).toHaveCount(0);
 	await expect(page.getByRole('button', { name: 'Save the facts' })).toHaveCount(0);
 	await expect(page.getByTestId('track-dance-fits-slot')).toBeVisible();
