@@ -123,6 +123,7 @@ async function saves(connections: number, cookie: string) {
 		'content-type': 'application/json',
 		accept: 'application/json'
 	};
+	const url = `${BASE}/api/evenings/${evening.id}/run-order`;
 	const latencies: number[] = [];
 	let accepted = 0;
 	let conflicts = 0;
