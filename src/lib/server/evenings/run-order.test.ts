@@ -196,6 +196,23 @@ describe('planning from the database', () => {
 		}
 	});
 
+	test("never-play dances stay out and must-play dances get in (the evening's planSettings)", () => {
+		const usual = planFor(1, 4);
+		const played = [...new Set(usual.entries.map((e) => e.danceId).filter(Boolean))] as number[];
+		const banned = played.find((d) => d !== danceId('Marrowby Lantern Waltz'))!;
+		const unplayed = refs.danceRows.find((d) => !played.includes(d.id))!.id;
+		updateEvening(1, {
+			planSettings: { mustPlay: [unplayed], neverPlay: { danceIds: [banned] } }
+		});
+		const input = planInputFor(1, 4);
+		expect(input.mustPlay).toEqual([unplayed]);
+		const result = planFor(1, 4);
+		const ids = result.entries.map((e) => e.danceId);
+		expect(ids).not.toContain(banned);
+		// The must-play dance had no place in the usual plan; now it is in.
+		expect(ids).toContain(unplayed);
+	});
+
 	test('planAndSave writes the run order; saved locks survive the next planAndSave', () => {
 		const saved = planAndSave(1, 5);
 		const e = loadEvening(1)!;
