@@ -2,9 +2,9 @@ import { building } from '$app/environment';
 import { json, type Handle, type ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { handle as authHandle } from './auth';
-import { db } from '$lib/server/db';
+import { closeDb, db } from '$lib/server/db';
 import { isApi } from '$lib/server/guard';
-import { startCatcher } from '$lib/server/mail/catcher';
+import { startCatcher, stopCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
 import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
@@ -15,6 +15,12 @@ export const init: ServerInit = async () => {
 	const swept = describeSweep(await sweepOrphans());
 	if (swept) console.log(swept);
 	if (mailIsCaptured()) await startCatcher();
+	// adapter-node stops serving on SIGTERM/SIGINT, then waits for the event loop to empty: close
+	// what we opened (the mail catcher's socket, the database) so the process really exits.
+	process.once('sveltekit:shutdown' as 'exit', () => {
+		void stopCatcher();
+		closeDb();
+	});
 };
 
 /**

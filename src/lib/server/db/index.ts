@@ -32,6 +32,11 @@ export function db(): Db {
 	return instance;
 }
 
+export function closeDb() {
+	instance?.$client.close();
+	instance = undefined;
+}
+
 /** Tests swap in a database of their own. */
 export function useDb(next: Db | undefined) {
 	instance = next;

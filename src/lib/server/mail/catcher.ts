@@ -59,3 +59,10 @@ export function startCatcher() {
 	});
 	return running;
 }
+
+export async function stopCatcher() {
+	if (!running) return;
+	const { close } = await running;
+	running = undefined;
+	await close();
+}
