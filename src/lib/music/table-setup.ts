@@ -18,7 +18,7 @@ import {
 	tableFeatures,
 	type ColumnDef
 } from '@tanstack/svelte-table';
-import type { TrackJson } from './track-types';
+import { SOURCE_WORDS, type TrackJson } from './track-types';
 
 /** Width of each column in the CSS grid, carried on the column's meta. */
 export interface ColumnMetaInfo {
@@ -143,6 +143,7 @@ export const columns: Col[] = [
 		header: 'Tempo from',
 		sortFn: 'text',
 		enableGlobalFilter: false,
+		cell: (c) => SOURCE_WORDS[c.row.original.bpmSource],
 		meta: { size: '7rem' }
 	},
 	{

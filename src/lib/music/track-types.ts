@@ -44,3 +44,11 @@ export interface TrackPage {
 
 /** Default phrase: 8 bars, so 32 beats in 4/4 and 24 in 3/4 (common practice, no source). */
 export const defaultPhraseBeats = (meter: Meter): number => meter * 8;
+
+/** How the tempo was obtained, in the words the pages show. */
+export const SOURCE_WORDS: Record<TempoSource, string> = {
+	detected: 'measured',
+	tapped: 'tapped',
+	entered: 'typed in',
+	tag: 'from the file’s BPM tag'
+};
