@@ -340,3 +340,31 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await expect(rows.last()).toContainText('Announcement: Raffle at the break');
 	await expect(page.getByText(choice).first()).toBeVisible();
 });
+
+test('the run order can be reordered from the keyboard alone', async ({ page }) => {
+	const api = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(api, 'organiser');
+	await ensureRunOrder(api);
+	await api.dispose();
+	await signIn(page, 'organiser');
+	await page.goto('/evenings/1');
+	const names = await entryNames(page);
+	const k = names.findIndex((n, i) => i >= 4 && names.indexOf(n) === names.lastIndexOf(n));
+	// The drag handle takes Space to pick up, arrows to move and Space to put down.
+	const handle = page
+		.getByTestId('entry')
+		.nth(k)
+		.getByLabel(/^Drag /);
+	await handle.focus();
+	await page.keyboard.press('Space');
+	await page.keyboard.press('ArrowDown');
+	await page.keyboard.press('Space');
+	await expect.poll(async () => (await entryNames(page)).indexOf(names[k])).toBe(k + 1);
+	// The explicit buttons do the same: Up puts it back.
+	await page
+		.getByTestId('entry')
+		.nth(k + 1)
+		.getByRole('button', { name: /^Up/ })
+		.click();
+	expect(await entryNames(page)).toEqual(names);
+});
