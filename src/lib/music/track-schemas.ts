@@ -3,8 +3,14 @@
 import { z } from 'zod';
 import { TEMPO_SOURCES, VERDICTS } from '../domain';
 
-const bpm = z.number().gt(0).lt(400);
-const meter = z.union([z.literal(3), z.literal(4)]);
+// Messages in words a DJ reads, not the validator's own wording.
+const bpm = z
+	.number({ message: 'A tempo is a number of beats per minute.' })
+	.gt(0, 'A tempo is above 0 BPM.')
+	.lt(400, 'A tempo is below 400 BPM.');
+const meter = z.union([z.literal(3), z.literal(4)], {
+	message: 'The meter is 3 (3/4) or 4 (4/4).'
+});
 
 /** The browser's analysis, sent beside the file on upload. */
 export const analysisSchema = z.object({
