@@ -71,24 +71,38 @@ export const MAX_LIMIT = 500;
 
 const optionalNumber = z.preprocess(
 	(v) => (v === '' || v === null ? undefined : v),
-	z.coerce.number().finite().optional()
+	z.coerce.number({ message: 'Give a tempo filter as a number of BPM.' }).finite().optional()
 );
 
 /** `unjudged` means: no verdict yet (for the dance given, or for any dance). */
 export const VERDICT_FILTERS = [...VERDICTS, 'unjudged'] as const;
 
 export const listQuerySchema = z.object({
-	q: z.string().trim().max(200).optional(),
+	q: z.string().trim().max(200, 'Keep the search under 200 characters.').optional(),
 	bpmMin: optionalNumber,
 	bpmMax: optionalNumber,
-	meter: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().pipe(meter).optional()),
+	meter: z.preprocess(
+		(v) => (v === '' ? undefined : v),
+		z.coerce.number({ message: 'The meter is 3 or 4.' }).pipe(meter).optional()
+	),
 	dance: z.preprocess(
 		(v) => (v === '' ? undefined : v),
-		z.coerce.number().int().positive().optional()
+		z.coerce
+			.number({ message: 'The dance filter is a dance id.' })
+			.int('The dance filter is a dance id.')
+			.positive('The dance filter is a dance id.')
+			.optional()
 	),
-	verdict: z.enum(VERDICT_FILTERS).optional(),
-	sort: z.enum(SORTS).default('title'),
-	limit: z.coerce.number().int().min(1).max(MAX_LIMIT).default(100),
-	cursor: z.string().max(1000).optional()
+	verdict: z
+		.enum(VERDICT_FILTERS, { message: `Verdict is one of: ${VERDICT_FILTERS.join(', ')}.` })
+		.optional(),
+	sort: z.enum(SORTS, { message: `Sort by one of: ${SORTS.join(', ')}.` }).default('title'),
+	limit: z.coerce
+		.number({ message: 'The limit is a number of tracks.' })
+		.int('The limit is a whole number.')
+		.min(1, 'The limit is at least 1.')
+		.max(MAX_LIMIT, `The limit is at most ${MAX_LIMIT}.`)
+		.default(100),
+	cursor: z.string().max(1000, 'That cursor is not one this server gave.').optional()
 });
 export type TrackListQuery = z.infer<typeof listQuerySchema>;
