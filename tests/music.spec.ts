@@ -151,10 +151,15 @@ test('tapping a tempo on the track page saves it as tapped', async ({ page }) =>
 	await page.getByRole('button', { name: /^Use / }).click();
 	await expect(page.getByTestId('track-bpm')).toHaveText(String(tapped));
 	await expect(page.getByTestId('track-bpm-source')).toHaveText('tapped');
-	// The rate control shows the tempo heard at that rate: bpm × rate.
+	// Typed entry records its own source.
+	await page.getByLabel('Type a tempo (BPM)').fill('127.5');
+	await page.getByRole('button', { name: 'Save tempo' }).click();
+	await expect(page.getByTestId('track-bpm')).toHaveText('127.5');
+	await expect(page.getByTestId('track-bpm-source')).toHaveText('typed in');
+	// The rate control shows the tempo heard at that rate: bpm × rate (DESIGN.md).
 	await page.getByRole('button', { name: '0.9×' }).click();
 	await expect(page.getByTestId('effective-bpm')).toContainText(
-		`${Math.round(tapped * 0.9 * 10) / 10} BPM`
+		`${Math.round(127.5 * 0.9 * 10) / 10} BPM (recorded at 127.5)`
 	);
 });
 
