@@ -277,6 +277,51 @@ const TABLE: Hostile[] = [
 		body: { json: { trackId: 999999, danceId: 1, verdict: 'fits' } },
 		status: 404
 	},
+	{
+		what: 'an evening that ends before it starts',
+		as: 'organiser',
+		method: 'POST',
+		path: '/api/evenings',
+		body: {
+			json: {
+				title: 'Backwards night',
+				startsAt: '2027-03-05T22:00:00Z',
+				endsAt: '2027-03-05T19:00:00Z'
+			}
+		}
+	},
+	{
+		what: 'an impossible date',
+		as: 'organiser',
+		method: 'POST',
+		path: '/api/evenings',
+		body: {
+			json: {
+				title: 'Leap night',
+				startsAt: '2027-02-30T25:61:00Z',
+				endsAt: '2027-03-01T22:00:00Z'
+			}
+		}
+	},
+	{
+		what: 'a run order with a version that is not a number',
+		as: 'organiser',
+		method: 'PUT',
+		path: '/api/evenings/1/run-order',
+		body: { json: { version: 'latest', entries: [] } }
+	},
+	{
+		what: 'a run-order entry at an absurd rate',
+		as: 'organiser',
+		method: 'PUT',
+		path: '/api/evenings/1/run-order',
+		body: {
+			json: {
+				version: 1,
+				entries: [{ kind: 'dance', danceId: 1, trackId: 1, rate: 40, durationS: 180 }]
+			}
+		}
+	},
 	// Query strings
 	{
 		what: 'a tempo filter that is not a number',

@@ -3,7 +3,10 @@
 import { z } from 'zod';
 import { CROWD_MIXES, ENTRY_KINDS, SECTION_KINDS } from '../domain';
 
-const id = z.number().int().positive();
+const id = z
+	.number({ message: 'Give ids and versions as numbers.' })
+	.int('Ids and versions are whole numbers.')
+	.positive('Ids and versions are above 0.');
 const plainText = (max: number, what: string) =>
 	z
 		.string()
