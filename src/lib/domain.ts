@@ -53,7 +53,13 @@ export type Verdict = (typeof VERDICTS)[number];
 export const CROWD_MIXES = ['mostly-beginners', 'mixed', 'experienced'] as const;
 export type CrowdMix = (typeof CROWD_MIXES)[number];
 
-export const SECTION_KINDS = ['lesson', 'open-floor', 'request-block', 'break', 'last-dance'] as const;
+export const SECTION_KINDS = [
+	'lesson',
+	'open-floor',
+	'request-block',
+	'break',
+	'last-dance'
+] as const;
 export type SectionKind = (typeof SECTION_KINDS)[number];
 
 export const ENTRY_KINDS = ['dance', 'teach', 'walkthrough', 'break', 'announcement'] as const;
