@@ -8,6 +8,7 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { signInCookie } from '../tests/support-server';
 import { fillLibrary } from './bench/fill';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
@@ -59,30 +60,6 @@ async function waitForServer() {
 		await new Promise((r) => setTimeout(r, 200));
 	}
 	throw new Error('The server did not start.');
-}
-
-async function signIn(email: string): Promise<string> {
-	const res = await fetch(`${BASE}/signin`, {
-		method: 'POST',
-		redirect: 'manual',
-		headers: {
-			origin: BASE,
-			'content-type': 'application/x-www-form-urlencoded',
-			accept: 'text/html'
-		},
-		body: new URLSearchParams({
-			providerId: 'credentials',
-			email,
-			password: 'floorset-demo',
-			redirectTo: '/'
-		})
-	});
-	const cookie = res.headers
-		.getSetCookie()
-		.map((c) => c.split(';')[0])
-		.find((c) => c.startsWith('authjs.session-token='));
-	if (!cookie) throw new Error(`Sign-in failed for ${email}: ${res.status}`);
-	return cookie;
 }
 
 interface Row {
@@ -178,7 +155,7 @@ async function saves(connections: number, cookie: string) {
 
 try {
 	await waitForServer();
-	const cookie = await signIn('organiser@floorset.test');
+	const cookie = await signInCookie(BASE, 'organiser@floorset.test');
 	const share = evening.shareToken;
 	for (const c of [50, 200]) {
 		await hammer('GET /api/tracks?limit=100', '/api/tracks?limit=100', c, cookie);
