@@ -9,7 +9,7 @@ import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { encodeWav, generateSong } from '../src/lib/synth/index';
-import { kill, signInCookie, startInstance, type Instance } from './support-server';
+import { kill, seedPrivate, signInCookie, startInstance, type Instance } from './support-server';
 
 const ROUNDS = 8;
 const KILL_AFTER_MS = [40, 150, 300, 500, 800, 1200, 2000, 3500];
@@ -20,14 +20,8 @@ test.describe.configure({ mode: 'serial', timeout: 240_000 });
 let dir: string;
 test.beforeAll(async () => {
 	dir = mkdtempSync(join(tmpdir(), 'floorset-faults-'));
-	// Seed the private database the way `npm start` does, from the shared audio cache.
-	process.env.DATABASE_URL = join(dir, 'floorset.db');
-	process.env.UPLOAD_DIR = join(dir, 'uploads');
-	process.env.SEED_CACHE_DIR ??= 'data/seed-cache';
-	const { seed } = await import('../scripts/seed');
-	await seed();
-	const { db } = await import('../src/lib/server/db');
-	db().$client.close();
+	// A private database and upload folder, seeded the way `npm start` does.
+	await seedPrivate(dir);
 });
 test.afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

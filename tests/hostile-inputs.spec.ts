@@ -8,7 +8,7 @@ import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { encodeWav, generateSong } from '../src/lib/synth/index';
-import { kill, signInCookie, startInstance, type Instance } from './support-server';
+import { kill, seedPrivate, signInCookie, startInstance, type Instance } from './support-server';
 
 const PORT = Number(process.env.E2E_PORT ?? 4173) + 60;
 
@@ -376,18 +376,13 @@ test.describe.configure({ mode: 'serial', timeout: 120_000 });
 
 test.beforeAll(async () => {
 	dir = mkdtempSync(join(tmpdir(), 'floorset-hostile-'));
-	process.env.DATABASE_URL = join(dir, 'floorset.db');
-	process.env.UPLOAD_DIR = join(dir, 'uploads');
-	process.env.SEED_CACHE_DIR ??= 'data/seed-cache';
-	const { seed } = await import('../scripts/seed');
-	await seed();
-	const { db } = await import('../src/lib/server/db');
-	db().$client.close();
-	process.env.MAX_UPLOAD_MB = '2';
+	// A private database and upload folder, seeded the way `npm start` does.
+	await seedPrivate(dir);
 	instance = await startInstance({
 		port: PORT,
 		databaseUrl: join(dir, 'floorset.db'),
-		uploadDir: join(dir, 'uploads')
+		uploadDir: join(dir, 'uploads'),
+		env: { MAX_UPLOAD_MB: '2' }
 	});
 	for (const role of ['dj', 'instructor', 'organiser', 'admin']) {
 		cookies.set(role, await signInCookie(instance.base, `${role}@floorset.test`));

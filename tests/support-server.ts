@@ -1,6 +1,7 @@
 // Starts and kills a private copy of the built app for the fault tests: its own port, database
 // and upload folder, so SIGKILL never touches the server the other tests use.
 import { spawn, type ChildProcess } from 'node:child_process';
+import { join } from 'node:path';
 
 export interface Instance {
 	base: string;
@@ -12,6 +13,7 @@ export async function startInstance(opts: {
 	port: number;
 	databaseUrl: string;
 	uploadDir: string;
+	env?: Record<string, string>;
 }): Promise<Instance> {
 	const base = `http://127.0.0.1:${opts.port}`;
 	let output = '';
@@ -24,7 +26,8 @@ export async function startInstance(opts: {
 			DATABASE_URL: opts.databaseUrl,
 			UPLOAD_DIR: opts.uploadDir,
 			AUTH_SECRET: 'fault-test-secret-0123456789abcdef',
-			SMTP_HOST: ''
+			SMTP_HOST: '',
+			...opts.env
 		},
 		stdio: ['ignore', 'pipe', 'pipe']
 	});
@@ -72,4 +75,25 @@ export async function signInCookie(base: string, email: string): Promise<string>
 		.find((c) => c.startsWith('authjs.session-token='));
 	if (!cookie) throw new Error(`Sign-in failed for ${email}: ${res.status}`);
 	return cookie;
+}
+
+/**
+ * Seeds a private database and upload folder under `dir`, as `npm start` would. The modules keep
+ * their settings, database and storage for the process, so all three are reset first: several
+ * spec files may do this one after another in the same test worker.
+ */
+export async function seedPrivate(dir: string) {
+	process.env.DATABASE_URL = join(dir, 'floorset.db');
+	process.env.UPLOAD_DIR = join(dir, 'uploads');
+	process.env.SEED_CACHE_DIR ??= 'data/seed-cache';
+	const { resetConfig } = await import('../src/lib/server/config');
+	const { closeDb } = await import('../src/lib/server/db');
+	const { useStorage } = await import('../src/lib/server/storage');
+	resetConfig();
+	closeDb();
+	useStorage(undefined);
+	const { seed } = await import('../scripts/seed');
+	await seed();
+	closeDb();
+	return { databaseUrl: join(dir, 'floorset.db'), uploadDir: join(dir, 'uploads') };
 }
