@@ -203,3 +203,26 @@ describe('failures leave neither the row nor the file', () => {
 		expect(s.files()).toEqual([]);
 	});
 });
+
+describe('when the upload folder cannot be written', () => {
+	// As root a chmod does not stop writes, so the storage refuses as a full or read-only disk does.
+	const refusing = (code: string): Storage => ({
+		...s.store,
+		put: async () => {
+			throw Object.assign(new Error(`${code}: cannot write`), { code });
+		}
+	});
+	for (const code of ['ENOSPC', 'EACCES', 'EROFS']) {
+		test(`${code} gives a clear 507, no row, no file and no crash`, async () => {
+			const { bytes } = wav(120, 4);
+			const r = await uploadTrack(
+				{ bytes, fileName: 'full.wav', analysis: analysisJson(), uploadedBy: null },
+				refusing(code)
+			);
+			expect(r).toMatchObject({ ok: false, status: 507 });
+			expect(!r.ok && r.error).toMatch(/disk is full or the upload folder is not writable/);
+			expect(rows()).toHaveLength(0);
+			expect(s.files()).toEqual([]);
+		});
+	}
+});

@@ -27,7 +27,7 @@ export interface UploadInput {
 
 export type UploadResult =
 	| { ok: true; status: 201 | 200; duplicate: boolean; track: TrackJson }
-	| { ok: false; status: 400 | 413 | 415 | 422; error: string };
+	| { ok: false; status: 400 | 413 | 415 | 422 | 507; error: string };
 
 export const maxUploadBytes = () => Math.floor(config().MAX_UPLOAD_MB * 1024 * 1024);
 
@@ -99,7 +99,20 @@ export async function uploadTrack(
 
 	const name = displayName(input.fileName);
 	const storageKey = `audio/${sha256}.${facts.ext}`;
-	await store.put(storageKey, input.bytes);
+	try {
+		await store.put(storageKey, input.bytes);
+	} catch (e) {
+		// A full disk or an unwritable upload folder: say so plainly; nothing was stored.
+		const code = (e as NodeJS.ErrnoException).code ?? '';
+		if (!['ENOSPC', 'EACCES', 'EPERM', 'EROFS', 'EDQUOT', 'ENOENT'].includes(code)) throw e;
+		console.error(`Upload could not be stored (${code}):`, (e as Error).message);
+		return {
+			ok: false,
+			status: 507,
+			error:
+				'The server could not store the file: its disk is full or the upload folder is not writable. Nothing was saved; tell whoever runs Floorset.'
+		};
+	}
 	try {
 		const row = db()
 			.insert(tracks)
