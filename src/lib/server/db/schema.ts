@@ -148,7 +148,11 @@ export const tracks = sqliteTable(
 		check('tracks_source', sql`${t.bpmSource} IN ('detected','tapped','entered','tag')`),
 		index('tracks_bpm_idx').on(t.bpm),
 		index('tracks_title_idx').on(t.title),
-		index('tracks_created_idx').on(t.createdAt)
+		index('tracks_created_idx').on(t.createdAt),
+		// The music table's sorted pages (src/lib/server/tracks/list-tracks.ts sorts by these
+		// expressions, then id, for keyset paging).
+		index('tracks_title_nocase_id_idx').on(sql`${t.title} COLLATE NOCASE`, t.id),
+		index('tracks_artist_nocase_id_idx').on(sql`${t.artist} COLLATE NOCASE`, t.id)
 	]
 );
 
