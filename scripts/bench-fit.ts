@@ -59,7 +59,7 @@ const dances: DanceFacts[] = [
 	{
 		...base,
 		id: 2,
-		name: 'Harvest Moon Glide',
+		name: 'Gleaning Moon Glide',
 		counts: 48,
 		walls: 2,
 		rhythm: 'waltz',
