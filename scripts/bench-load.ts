@@ -4,33 +4,21 @@
 // second, median and 99th-percentile latency, errors, lost saves and the server's peak memory.
 // BENCH_SECONDS (default 30) sets each run's length. Needs `npm run build` first.
 import autocannon from 'autocannon';
-import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { signInCookie } from '../tests/support-server';
+import { closeDb } from '../src/lib/server/db';
+import { kill, seedPrivate, signInCookie, startInstance } from '../tests/support-server';
 import { fillLibrary } from './bench/fill';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
 const PORT = Number(process.env.BENCH_PORT ?? 4300);
-const BASE = `http://127.0.0.1:${PORT}`;
 const dir = mkdtempSync(join(tmpdir(), 'floorset-load-'));
-Object.assign(process.env, {
-	PORT: String(PORT),
-	HOST: '127.0.0.1',
-	ORIGIN: BASE,
-	DATABASE_URL: join(dir, 'floorset.db'),
-	UPLOAD_DIR: join(dir, 'uploads'),
-	AUTH_SECRET: 'bench-only-secret-0123456789abcdef',
-	SEED_CACHE_DIR: process.env.SEED_CACHE_DIR ?? 'data/seed-cache'
-});
 
-const { applyEnvDefaults } = await import('./env');
-applyEnvDefaults();
+// The same private seeded database and server start the fault tests use.
+const opts = await seedPrivate(dir);
 const { db } = await import('../src/lib/server/db');
-const { seed } = await import('./seed');
 const { evenings, tracks } = await import('../src/lib/server/db/schema');
-await seed();
 const first = db().select().from(tracks).get()!;
 fillLibrary(db(), {
 	tracks: 10_000 - 60,
@@ -39,28 +27,14 @@ fillLibrary(db(), {
 	fileSize: first.fileSize
 });
 const evening = db().select().from(evenings).get()!;
-db().$client.close();
+closeDb();
 
-const server = spawn(process.execPath, [`${process.env.FLOORSET_BUILD_DIR ?? 'build'}/index.js`], {
-	env: process.env,
-	stdio: ['ignore', 'ignore', 'inherit']
-});
+const server = await startInstance({ port: PORT, ...opts });
+const BASE = server.base;
 const peakMemoryMb = () => {
-	const status = readFileSync(`/proc/${server.pid}/status`, 'utf8');
+	const status = readFileSync(`/proc/${server.proc.pid}/status`, 'utf8');
 	return Number(status.match(/VmHWM:\s+(\d+)/)?.[1] ?? 0) / 1024;
 };
-
-async function waitForServer() {
-	for (let i = 0; i < 100; i++) {
-		try {
-			if ((await fetch(`${BASE}/healthz`)).ok) return;
-		} catch {
-			/* not up yet */
-		}
-		await new Promise((r) => setTimeout(r, 200));
-	}
-	throw new Error('The server did not start.');
-}
 
 interface Row {
 	target: string;
@@ -154,7 +128,6 @@ async function saves(connections: number, cookie: string) {
 }
 
 try {
-	await waitForServer();
 	const cookie = await signInCookie(BASE, 'organiser@floorset.test');
 	const share = evening.shareToken;
 	for (const c of [50, 200]) {
@@ -189,6 +162,6 @@ try {
 	}
 	console.log(`\nserver peak memory (VmHWM): ${peakMemoryMb().toFixed(0)} MB`);
 } finally {
-	server.kill('SIGTERM');
+	await kill(server);
 	rmSync(dir, { recursive: true, force: true });
 }

@@ -481,3 +481,19 @@ export const DANCES: DemoDance[] = [
 		bpmMax: 100
 	}
 ];
+
+/** A demo dance as the columns of its row (shared by the seed and the server's test fixtures). */
+export const danceValues = (d: DemoDance) => ({
+	name: d.name,
+	counts: d.counts,
+	walls: d.walls,
+	level: d.level,
+	rhythm: d.rhythm,
+	meter: d.meter,
+	bpmMin: d.bpmMin,
+	bpmMax: d.bpmMax,
+	turn: d.turn ?? null,
+	wellKnown: d.wellKnown ?? false,
+	events: d.events ?? [],
+	notes: d.notes ?? ''
+});

@@ -13,7 +13,7 @@ import { createUser } from '../src/lib/server/users';
 import type { Role } from '../src/lib/domain';
 import { demoAudio } from './audio';
 import { DEMO_PASSWORD, PEOPLE } from './club';
-import { DANCES } from './dances';
+import { DANCES, danceValues } from './dances';
 import { seedEvenings } from './evenings';
 import { TRACKS } from './tracks';
 
@@ -66,21 +66,7 @@ export async function seedDemo(db: Db, options: SeedOptions): Promise<boolean> {
 		const danceRows = DANCES.map((d) =>
 			tx
 				.insert(dances)
-				.values({
-					name: d.name,
-					counts: d.counts,
-					walls: d.walls,
-					level: d.level,
-					rhythm: d.rhythm,
-					meter: d.meter,
-					bpmMin: d.bpmMin,
-					bpmMax: d.bpmMax,
-					turn: d.turn ?? null,
-					wellKnown: d.wellKnown ?? false,
-					events: d.events ?? [],
-					notes: d.notes ?? '',
-					createdBy: instructor
-				})
+				.values({ ...danceValues(d), createdBy: instructor })
 				.returning()
 				.get()
 		);

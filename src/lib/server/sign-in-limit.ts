@@ -1,7 +1,7 @@
 // Failed sign-ins are limited per account and per address. The figures are our own
 // judgement (in the spirit of OWASP's authentication guidance, from memory): enough tries
 // for a person who mistypes, too few for guessing.
-import { and, eq, gte, inArray, lt } from 'drizzle-orm';
+import { and, eq, gte, lt } from 'drizzle-orm';
 import { db } from './db';
 import { signInFailures } from './db/schema';
 
@@ -50,6 +50,6 @@ export function recordFailure(email: string, address: string, now = Date.now()) 
 export function clearAccount(email: string) {
 	db()
 		.delete(signInFailures)
-		.where(inArray(signInFailures.key, [keys(email, '').account]))
+		.where(eq(signInFailures.key, keys(email, '').account))
 		.run();
 }

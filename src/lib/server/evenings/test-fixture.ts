@@ -5,7 +5,7 @@ import type { Db } from '../db';
 import { dances, fits, tracks, users } from '../db/schema';
 import { createUser } from '../users';
 import { PEOPLE } from '../../../../seeds/club';
-import { DANCES } from '../../../../seeds/dances';
+import { DANCES, danceValues } from '../../../../seeds/dances';
 import { seedEvenings } from '../../../../seeds/evenings';
 import { TRACKS } from '../../../../seeds/tracks';
 
@@ -25,25 +25,7 @@ export function seedLike(db: Db) {
 			.all()
 			.map((u) => [u.email, u.id])
 	) as Record<string, number>;
-	const danceRows = DANCES.map((d) =>
-		db
-			.insert(dances)
-			.values({
-				name: d.name,
-				counts: d.counts,
-				walls: d.walls,
-				level: d.level,
-				rhythm: d.rhythm,
-				meter: d.meter,
-				bpmMin: d.bpmMin,
-				bpmMax: d.bpmMax,
-				turn: d.turn ?? null,
-				wellKnown: d.wellKnown ?? false,
-				events: d.events ?? []
-			})
-			.returning()
-			.get()
-	);
+	const danceRows = DANCES.map((d) => db.insert(dances).values(danceValues(d)).returning().get());
 	const trackRows = TRACKS.map((t, i) =>
 		db
 			.insert(tracks)
