@@ -2,6 +2,9 @@
 import { eq, sql } from 'drizzle-orm';
 import { ROLES, type Role } from '../domain';
 import { db } from './db';
+import { preparedFor } from './db/prepared';
+import { changeStamp } from './cache/change-stamp';
+import { StampedCache } from './cache/stamped-cache';
 import { userRoles, users } from './db/schema';
 
 export interface SessionUser {
@@ -21,15 +24,37 @@ export function findUserByEmail(email: string) {
 		.get();
 }
 
+// Read on every request (roles are never taken from the cookie), so prepared once.
+const statements = preparedFor((d) => {
+	const id = sql.placeholder('id');
+	return {
+		user: d.select().from(users).where(eq(users.id, id)).prepare(),
+		roles: d.select().from(userRoles).where(eq(userRoles.userId, id)).prepare()
+	};
+});
+
 export function rolesOf(userId: number): Role[] {
-	const rows = db().select().from(userRoles).where(eq(userRoles.userId, userId)).all();
+	const rows = statements().roles.all({ id: userId });
 	return ROLES.filter((r) => rows.some((row) => row.role === r));
 }
 
+// Who is signed in, kept until the database next changes (a role given or taken is a change).
+const signedIn = new StampedCache<SessionUser | null>(10_000, () => 1);
+
 export function sessionUser(userId: number): SessionUser | null {
-	const user = db().select().from(users).where(eq(users.id, userId)).get();
+	return signedIn.through(String(userId), changeStamp(db().$client), () => readSessionUser(userId));
+}
+
+function readSessionUser(userId: number): SessionUser | null {
+	const user = statements().user.get({ id: userId });
 	if (!user || !user.passwordHash) return null;
-	return { id: user.id, email: user.email, name: user.name, roles: rolesOf(user.id) };
+	// Shared by every request until the next write: frozen, so no request can change it for others.
+	return Object.freeze({
+		id: user.id,
+		email: user.email,
+		name: user.name,
+		roles: Object.freeze(rolesOf(user.id)) as Role[]
+	});
 }
 
 export function setRoles(userId: number, roles: readonly Role[]) {

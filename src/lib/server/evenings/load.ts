@@ -1,8 +1,9 @@
 // Reading evenings: one evening with its sections and run order as plain JSON (the API's shape,
 // also used by the exports and the public page), and the list of evenings.
-import { asc, desc, eq, inArray } from 'drizzle-orm';
+import { asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { CrowdMix, EntryKind, Level, Rhythm, SectionKind } from '../../domain';
 import { db } from '../db';
+import { preparedFor } from '../db/prepared';
 import { dances, evenings, runOrderEntries, sections, tracks, users } from '../db/schema';
 import { clubTimeZone } from './timezone';
 
@@ -73,19 +74,45 @@ export interface EveningJson extends Omit<EveningSummary, 'entryCount'> {
 
 const iso = (d: Date) => d.toISOString();
 
+// Every run-order read and save goes through these three queries: prepared once.
+const statements = preparedFor((d) => {
+	const eveningId = sql.placeholder('eveningId');
+	return {
+		evening: d.select().from(evenings).where(eq(evenings.id, eveningId)).prepare(),
+		sections: d
+			.select({
+				s: sections,
+				danceName: dances.name,
+				teacherName: users.name
+			})
+			.from(sections)
+			.leftJoin(dances, eq(dances.id, sections.danceId))
+			.leftJoin(users, eq(users.id, sections.teacherId))
+			.where(eq(sections.eveningId, eveningId))
+			.orderBy(asc(sections.startsAt), asc(sections.position))
+			.prepare(),
+		entries: d
+			.select({
+				e: runOrderEntries,
+				danceName: dances.name,
+				danceLevel: dances.level,
+				danceRhythm: dances.rhythm,
+				trackTitle: tracks.title,
+				trackArtist: tracks.artist,
+				trackBpm: tracks.bpm
+			})
+			.from(runOrderEntries)
+			.leftJoin(dances, eq(dances.id, runOrderEntries.danceId))
+			.leftJoin(tracks, eq(tracks.id, runOrderEntries.trackId))
+			.where(eq(runOrderEntries.eveningId, eveningId))
+			.orderBy(asc(runOrderEntries.position))
+			.prepare()
+	};
+});
+
 function loadSections(eveningId: number): SectionJson[] {
-	return db()
-		.select({
-			s: sections,
-			danceName: dances.name,
-			teacherName: users.name
-		})
-		.from(sections)
-		.leftJoin(dances, eq(dances.id, sections.danceId))
-		.leftJoin(users, eq(users.id, sections.teacherId))
-		.where(eq(sections.eveningId, eveningId))
-		.orderBy(asc(sections.startsAt), asc(sections.position))
-		.all()
+	return statements()
+		.sections.all({ eveningId })
 		.map(({ s, danceName, teacherName }) => ({
 			id: s.id,
 			position: s.position,
@@ -102,22 +129,8 @@ function loadSections(eveningId: number): SectionJson[] {
 
 /** The run order of an evening, in position order, with names for people to read. */
 export function loadEntries(eveningId: number, startsAtMs: number): EntryJson[] {
-	return db()
-		.select({
-			e: runOrderEntries,
-			danceName: dances.name,
-			danceLevel: dances.level,
-			danceRhythm: dances.rhythm,
-			trackTitle: tracks.title,
-			trackArtist: tracks.artist,
-			trackBpm: tracks.bpm
-		})
-		.from(runOrderEntries)
-		.leftJoin(dances, eq(dances.id, runOrderEntries.danceId))
-		.leftJoin(tracks, eq(tracks.id, runOrderEntries.trackId))
-		.where(eq(runOrderEntries.eveningId, eveningId))
-		.orderBy(asc(runOrderEntries.position))
-		.all()
+	return statements()
+		.entries.all({ eveningId })
 		.map(({ e, ...r }) => ({
 			id: e.id,
 			position: e.position,
@@ -144,7 +157,7 @@ export function loadEntries(eveningId: number, startsAtMs: number): EntryJson[] 
 
 /** One evening with its sections and run order, or null when there is no such evening. */
 export function loadEvening(id: number): EveningJson | null {
-	const row = db().select().from(evenings).where(eq(evenings.id, id)).get();
+	const row = statements().evening.get({ eveningId: id });
 	if (!row) return null;
 	return {
 		id: row.id,

@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import { cachedJson } from '$lib/server/cache/cached-json';
 import { requireRight } from '$lib/server/guard';
 import { badRequest, describeIssue } from '$lib/server/json-body';
 import {
@@ -16,7 +17,7 @@ export const GET = ((event) => {
 	const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
 	if (!parsed.success) return badRequest(describeIssue(parsed.error));
 	try {
-		return json(listTracks(parsed.data));
+		return cachedJson(`tracks ${JSON.stringify(parsed.data)}`, () => listTracks(parsed.data))!;
 	} catch (e) {
 		if (e instanceof BadCursorError) return badRequest(e.message);
 		throw e;

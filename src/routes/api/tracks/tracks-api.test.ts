@@ -106,6 +106,34 @@ describe('GET /api/tracks', () => {
 		expect((await call(list.GET, at('/api/tracks?limit=9999'))).status).toBe(400);
 		expect((await call(list.GET, at('/api/tracks?cursor=nonsense'))).status).toBe(400);
 	});
+
+	test('a kept page never outlives a change: edits, deletes and direct writes show at once', async () => {
+		const track = await stored();
+		const page = async () =>
+			(await (await call(list.GET, at('/api/tracks?limit=5'))).json()) as {
+				total: number;
+				items: { title: string; bpm: number }[];
+			};
+		expect((await page()).items[0].bpm).toBe(120);
+		expect((await page()).items[0].bpm).toBe(120);
+		await call(
+			one.PATCH,
+			at(`/api/tracks/${track.id}`, {
+				method: 'PATCH',
+				body: JSON.stringify({ version: 1, bpm: 96 }),
+				headers: { 'content-type': 'application/json' }
+			}),
+			{ id: String(track.id) }
+		);
+		expect((await page()).items[0].bpm).toBe(96);
+		// A write from outside the routes (a script, another module) counts as much.
+		t.db.$client.prepare("UPDATE tracks SET title = 'Renamed by hand'").run();
+		expect((await page()).items[0].title).toBe('Renamed by hand');
+		await call(one.DELETE, at(`/api/tracks/${track.id}`, { method: 'DELETE' }), {
+			id: String(track.id)
+		});
+		expect((await page()).total).toBe(0);
+	});
 });
 
 describe('PATCH and DELETE /api/tracks/:id', () => {

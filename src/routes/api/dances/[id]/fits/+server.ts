@@ -1,4 +1,4 @@
-import { json } from '@sveltejs/kit';
+import { cachedJson } from '$lib/server/cache/cached-json';
 import { requireRight } from '$lib/server/guard';
 import { badRequest } from '$lib/server/json-body';
 import { idParam } from '$lib/server/dances/ids';
@@ -10,7 +10,9 @@ export const GET = ((event) => {
 	const id = idParam(event.params.id);
 	const limit = parseLimit(event.url.searchParams.get('limit'));
 	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
-	const result = id ? fitsForDance(id, limit) : null;
-	if (!result) return badRequest('No such dance.', 404);
-	return json({ dance: result.dance, items: result.items });
+	const found = cachedJson(`dance fits ${id} ${limit}`, () => {
+		const result = id ? fitsForDance(id, limit) : null;
+		return result && { dance: result.dance, items: result.items };
+	});
+	return found ?? badRequest('No such dance.', 404);
 }) satisfies RequestHandler;

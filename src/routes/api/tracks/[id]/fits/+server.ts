@@ -1,4 +1,4 @@
-import { json } from '@sveltejs/kit';
+import { cachedJson } from '$lib/server/cache/cached-json';
 import { requireRight } from '$lib/server/guard';
 import { badRequest } from '$lib/server/json-body';
 import { idParam } from '$lib/server/dances/ids';
@@ -10,7 +10,8 @@ export const GET = ((event) => {
 	const id = idParam(event.params.id);
 	const limit = parseLimit(event.url.searchParams.get('limit'));
 	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
-	const result = id ? fitsForTrack(id, limit) : null;
-	if (!result) return badRequest('No such track.', 404);
-	return json(result);
+	const found = cachedJson(`track fits ${id} ${limit}`, () =>
+		id ? fitsForTrack(id, limit) : null
+	);
+	return found ?? badRequest('No such track.', 404);
 }) satisfies RequestHandler;
