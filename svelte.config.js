@@ -18,7 +18,9 @@ const config = {
 			}
 		},
 		csp: {
-			mode: 'auto',
+			// Hashes, not nonces: a public page rendered once may be served many times
+			// (src/lib/server/cache/public-pages.ts), and a nonce must never be reused.
+			mode: 'hash',
 			directives: {
 				'default-src': ['self'],
 				'script-src': ['self'],

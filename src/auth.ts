@@ -6,6 +6,7 @@ import Credentials from '@auth/sveltekit/providers/credentials';
 import { z } from 'zod';
 import { authSecret, config } from '$lib/server/config';
 import { decoyHash, verifyPassword } from '$lib/server/passwords';
+import { SESSION_REFRESH_S } from '$lib/server/session-token';
 import { findUserByEmail } from '$lib/server/users';
 
 export const credentialsSchema = z.object({
@@ -18,8 +19,13 @@ export const credentialsSchema = z.object({
 	password: z.string().min(1, 'Enter your password.').max(200, 'That password is too long.')
 });
 
-export const { handle, signIn, signOut } = SvelteKitAuth(
-	async (): Promise<SvelteKitAuthConfig> => ({
+// Built on first use (never while building) and then kept: Auth.js asks for it on every request.
+let built: SvelteKitAuthConfig | undefined;
+
+export const { handle, signIn, signOut } = SvelteKitAuth(async () => (built ??= authConfig()));
+
+function authConfig(): SvelteKitAuthConfig {
+	return {
 		secret: authSecret(),
 		// @auth/sveltekit 1.11 ignores AUTH_TRUST_HOST in production; SvelteKit's origin check and
 		// adapter-node's ORIGIN decide which host we answer for.
@@ -31,7 +37,8 @@ export const { handle, signIn, signOut } = SvelteKitAuth(
 				if (e.name !== 'CredentialsSignin') console.error('[auth]', e);
 			}
 		},
-		session: { strategy: 'jwt', maxAge: 14 * 24 * 60 * 60 },
+		// The hooks re-issue the cookie through Auth.js at most once a day (session-token.ts).
+		session: { strategy: 'jwt', maxAge: 14 * 24 * 60 * 60, updateAge: SESSION_REFRESH_S },
 		pages: { signIn: '/signin', error: '/signin' },
 		providers: [
 			Credentials({
@@ -58,5 +65,5 @@ export const { handle, signIn, signOut } = SvelteKitAuth(
 				return { ...session, uid: typeof token.uid === 'number' ? token.uid : null };
 			}
 		}
-	})
-);
+	};
+}

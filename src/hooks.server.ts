@@ -2,15 +2,20 @@ import { building } from '$app/environment';
 import { json, type Handle, type ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { handle as authHandle } from './auth';
+import { keepPublicPages } from '$lib/server/cache/public-pages';
 import { closeDb, db } from '$lib/server/db';
+import { keepHeapNearLive } from '$lib/server/heap';
 import { isApi } from '$lib/server/guard';
 import { startCatcher, stopCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
 import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
+import { authSecret, config } from '$lib/server/config';
+import { sessionUid } from '$lib/server/session-token';
 
 export const init: ServerInit = async () => {
 	if (building) return;
+	keepHeapNearLive();
 	db();
 	const swept = describeSweep(await sweepOrphans());
 	if (swept) console.log(swept);
@@ -37,8 +42,12 @@ const onlyOurSignIn: Handle = ({ event, resolve }) => {
 
 const session: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
-	const s = (await event.locals.auth()) as { uid?: number | null } | null;
-	if (typeof s?.uid === 'number') event.locals.user = sessionUser(s.uid);
+	const uid = await sessionUid(
+		event.cookies,
+		{ secret: authSecret(), secure: config().origin.startsWith('https:') },
+		() => event.locals.auth()
+	);
+	if (uid !== null) event.locals.user = sessionUser(uid);
 	return resolve(event);
 };
 
@@ -64,5 +73,6 @@ export const handle = sequence(
 	onlyOurSignIn,
 	authHandle,
 	session,
+	keepPublicPages,
 	apiNeedsSession
 );

@@ -144,6 +144,36 @@ test('publishing again over the API keeps the link; an unknown evening is 404', 
 	expect((await organiser.delete('/api/evenings/999999/publish', { headers })).status()).toBe(404);
 });
 
+test('signed out, the public page is served as rendered until the evening changes, then anew', async () => {
+	const { shareUrl } = await (
+		await organiser.post(`/api/evenings/${own}/publish`, { headers })
+	).json();
+	const first = await anon.get(shareUrl);
+	const again = await anon.get(shareUrl);
+	expect(first.status()).toBe(200);
+	expect(await again.text()).toBe(await first.text());
+	// A page served twice carries hashes in its policy, never a one-time nonce.
+	const csp = again.headers()['content-security-policy'];
+	expect(csp).toMatch(/script-src 'self' 'sha256-[A-Za-z0-9+/=]+'/);
+	expect(csp).not.toContain('nonce-');
+	expect(await first.text()).not.toContain('nonce=');
+
+	const renamed = await organiser.patch(`/api/evenings/${own}`, {
+		headers,
+		data: { title: 'Copperlane Share Check, renamed' }
+	});
+	expect(renamed.status(), await renamed.text()).toBe(200);
+	expect(await (await anon.get(shareUrl)).text()).toContain('Copperlane Share Check, renamed');
+
+	// A signed-in visitor never gets the signed-out page: their own name is in the navigation.
+	const mine = await organiser.get(shareUrl);
+	expect(await mine.text()).toContain('Sign out');
+	await organiser.patch(`/api/evenings/${own}`, {
+		headers,
+		data: { title: 'Copperlane Share Check' }
+	});
+});
+
 // On the spec's own evening: unpublishing the demo's evening 1, even for a second, would break
 // the spec files that read it as a dancer at the same time.
 test('the organiser unpublishes and publishes again on the evening page: the old link answers 404', async ({

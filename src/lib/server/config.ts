@@ -27,6 +27,7 @@ const schema = z.object({
 export type Config = z.infer<typeof schema> & { origin: string };
 
 let cached: Config | undefined;
+let secret: string | undefined;
 
 export function config(): Config {
 	if (cached) return cached;
@@ -38,6 +39,7 @@ export function config(): Config {
 /** For tests that point the app at a fresh database. */
 export function resetConfig() {
 	cached = undefined;
+	secret = undefined;
 }
 
 /**
@@ -45,12 +47,17 @@ export function resetConfig() {
  * database so sessions survive a restart.
  */
 export function authSecret(): string {
+	secret ??= readOrCreateSecret();
+	return secret;
+}
+
+function readOrCreateSecret(): string {
 	const fromEnv = config().AUTH_SECRET;
 	if (fromEnv) return fromEnv;
 	const file = resolve(dirname(config().DATABASE_URL), '.auth-secret');
 	if (existsSync(file)) return readFileSync(file, 'utf8').trim();
 	mkdirSync(dirname(file), { recursive: true });
-	const secret = randomBytes(32).toString('base64url');
-	writeFileSync(file, secret, { mode: 0o600 });
-	return secret;
+	const created = randomBytes(32).toString('base64url');
+	writeFileSync(file, created, { mode: 0o600 });
+	return created;
 }

@@ -1,0 +1,78 @@
+// A published evening's page is read by a hall full of dancers scanning the same QR code, nearly
+// all signed out, and every one of them gets the same page. That page is rendered once per
+// database change and then served as it was. Only signed-out GETs of the public evening pages
+// are kept (no cookie of ours, no query), and only when no write overlapped the rendering. The
+// Content-Security-Policy uses hashes (svelte.config.js), not a per-response nonce, so a page
+// served twice weakens nothing.
+import type { Handle } from '@sveltejs/kit';
+import { db } from '../db';
+import { changeStamp } from './change-stamp';
+import { replayBytes } from './replay';
+import { StampedCache } from './stamped-cache';
+
+interface KeptPage {
+	status: number;
+	headers: [string, string][];
+	body: Uint8Array;
+	byteLength: number;
+}
+
+/** 16 MB: hundreds of evenings' pages. */
+export const publicPages = new StampedCache<KeptPage>(16 * 1024 * 1024);
+
+const rendering = new Map<string, Promise<KeptPage | null>>();
+
+const PUBLIC_PAGE = /^\/e\/[A-Za-z0-9_-]{1,64}(\/poster)?$/;
+
+const replay = (p: KeptPage) => replayBytes(p.body, { status: p.status, headers: p.headers });
+
+export const keepPublicPages: Handle = async ({ event, resolve }) => {
+	const cookie = event.request.headers.get('cookie') ?? '';
+	if (
+		event.request.method !== 'GET' ||
+		event.locals.user ||
+		event.url.search ||
+		cookie.includes('authjs.') ||
+		!PUBLIC_PAGE.test(event.url.pathname)
+	) {
+		return resolve(event);
+	}
+	const key = event.url.pathname;
+	const stamp = changeStamp(db().$client);
+	const kept = publicPages.get(key, stamp);
+	if (kept) return replay(kept);
+	// When the QR code goes up, a hundred phones ask at once: one renders, the rest wait for it.
+	const flight = `${stamp} ${key}`;
+	const pending = rendering.get(flight);
+	if (pending) {
+		const page = await pending;
+		if (page) return replay(page);
+		return resolve(event);
+	}
+	let settle!: (page: KeptPage | null) => void;
+	rendering.set(flight, new Promise((r) => (settle = r)));
+	let page: KeptPage | null = null;
+	try {
+		const response = await resolve(event);
+		if (
+			response.status !== 200 ||
+			response.headers.has('set-cookie') ||
+			!response.headers.get('content-type')?.startsWith('text/html') ||
+			changeStamp(db().$client) !== stamp
+		) {
+			return response;
+		}
+		const body = new Uint8Array(await response.arrayBuffer());
+		page = {
+			status: response.status,
+			headers: [...response.headers],
+			body,
+			byteLength: body.byteLength
+		};
+		publicPages.set(key, stamp, page);
+		return replay(page);
+	} finally {
+		rendering.delete(flight);
+		settle(page);
+	}
+};
