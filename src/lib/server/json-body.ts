@@ -17,10 +17,8 @@ export function describeIssue(error: z.ZodError): string {
 	return `${where}${issue.message}`;
 }
 
-export async function readJson<S extends z.ZodType>(
-	request: Request,
-	schema: S
-): Promise<Result<z.infer<S>>> {
+/** The body parsed as JSON (type and size checked), not yet validated. */
+export async function readJsonValue(request: Request): Promise<Result<unknown>> {
 	const type = request.headers.get('content-type') ?? '';
 	if (!type.includes('application/json')) {
 		return { ok: false, response: badRequest('Send the body as application/json.', 415) };
@@ -33,15 +31,26 @@ export async function readJson<S extends z.ZodType>(
 	if (text.length > MAX_JSON_BYTES) {
 		return { ok: false, response: badRequest('The request body is too large.', 413) };
 	}
-	let value: unknown;
 	try {
-		value = JSON.parse(text);
+		return { ok: true, data: JSON.parse(text) as unknown };
 	} catch {
 		return { ok: false, response: badRequest('The body is not valid JSON.') };
 	}
+}
+
+/** A parsed body checked against its schema; the first problem becomes a 422 in words. */
+export function validateJson<S extends z.ZodType>(value: unknown, schema: S): Result<z.infer<S>> {
 	const parsed = schema.safeParse(value);
 	if (!parsed.success) {
 		return { ok: false, response: badRequest(describeIssue(parsed.error), 422) };
 	}
 	return { ok: true, data: parsed.data };
+}
+
+export async function readJson<S extends z.ZodType>(
+	request: Request,
+	schema: S
+): Promise<Result<z.infer<S>>> {
+	const value = await readJsonValue(request);
+	return value.ok ? validateJson(value.data, schema) : value;
 }

@@ -1,9 +1,10 @@
 // Saving a run order: the whole list at once, refused (409) when the version is stale so that two
 // people editing at once never overwrite each other; start times are recomputed here.
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { DEFAULT_DURATION_S, recomputeStarts } from '../../components/evening/timing';
 import type { EntryInput } from '../../schemas/evening';
 import { db } from '../db';
+import { preparedFor } from '../db/prepared';
 import { dances, evenings, fits, runOrderEntries, sections, tracks } from '../db/schema';
 import { EveningError } from './errors';
 import { gapSeconds } from './gap';
@@ -17,6 +18,35 @@ const ids = (list: (number | null | undefined)[]) => [
 	...new Set(list.filter((x): x is number => typeof x === 'number'))
 ];
 
+function refuseStale(
+	evening: { runOrderVersion: number } | undefined,
+	version: number
+): asserts evening {
+	if (!evening) throw new EveningError('There is no such evening.', 404);
+	if (evening.runOrderVersion !== version) {
+		throw new EveningError(
+			'Someone else saved this run order after you opened it. Reload to see their version; your changes stay on screen until you do.',
+			409,
+			{ currentVersion: evening.runOrderVersion }
+		);
+	}
+}
+
+// When several people save at once most saves are stale: the route refuses them before it
+// validates their entries or opens a transaction (saveRunOrder checks again inside it).
+const storedVersion = preparedFor((d) =>
+	d
+		.select({ runOrderVersion: evenings.runOrderVersion })
+		.from(evenings)
+		.where(eq(evenings.id, sql.placeholder('id')))
+		.prepare()
+);
+
+/** Throws EveningError 404 or 409 unless `version` is the evening's current run-order version. */
+export function refuseStaleSave(eveningId: number, version: unknown) {
+	refuseStale(storedVersion().get({ id: eveningId }), version as number);
+}
+
 /**
  * Replaces the evening's run order if `version` is the one stored, and bumps it. A stale version
  * throws EveningError 409 (with the current version) and changes nothing.
@@ -28,14 +58,7 @@ export function saveRunOrder(
 ): SaveResult {
 	return db().transaction((tx) => {
 		const evening = tx.select().from(evenings).where(eq(evenings.id, eveningId)).get();
-		if (!evening) throw new EveningError('There is no such evening.', 404);
-		if (evening.runOrderVersion !== version) {
-			throw new EveningError(
-				'Someone else saved this run order after you opened it. Reload to see their version; your changes stay on screen until you do.',
-				409,
-				{ currentVersion: evening.runOrderVersion }
-			);
-		}
+		refuseStale(evening, version);
 		const sectionRows = tx.select().from(sections).where(eq(sections.eveningId, eveningId)).all();
 		const sectionIds = new Set(sectionRows.map((s) => s.id));
 		for (const e of entries) {
@@ -97,27 +120,29 @@ export function saveRunOrder(
 			gapSeconds(evening.planSettings)
 		);
 		tx.delete(runOrderEntries).where(eq(runOrderEntries.eveningId, eveningId)).run();
-		rows.forEach((e, position) => {
+		if (rows.length) {
 			tx.insert(runOrderEntries)
-				.values({
-					eveningId,
-					position,
-					kind: e.kind,
-					sectionId: e.sectionId ?? null,
-					danceId:
-						e.kind === 'dance' || e.kind === 'teach' || e.kind === 'walkthrough'
-							? (e.danceId ?? null)
-							: null,
-					trackId: e.kind === 'dance' || e.kind === 'teach' ? (e.trackId ?? null) : null,
-					rate: e.rate,
-					startS: Math.round(starts[position] * 1000) / 1000,
-					durationS: Math.round(e.durationS * 1000) / 1000,
-					locked: e.locked,
-					text: e.text,
-					reasons: e.reasons
-				})
+				.values(
+					rows.map((e, position) => ({
+						eveningId,
+						position,
+						kind: e.kind,
+						sectionId: e.sectionId ?? null,
+						danceId:
+							e.kind === 'dance' || e.kind === 'teach' || e.kind === 'walkthrough'
+								? (e.danceId ?? null)
+								: null,
+						trackId: e.kind === 'dance' || e.kind === 'teach' ? (e.trackId ?? null) : null,
+						rate: e.rate,
+						startS: Math.round(starts[position] * 1000) / 1000,
+						durationS: Math.round(e.durationS * 1000) / 1000,
+						locked: e.locked,
+						text: e.text,
+						reasons: e.reasons
+					}))
+				)
 				.run();
-		});
+		}
 		const next = version + 1;
 		const bumped = tx
 			.update(evenings)

@@ -1,28 +1,40 @@
 import { json } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
-import { readJson } from '$lib/server/json-body';
-import { mayRead } from '$lib/server/evenings/access';
+import { readJsonValue, validateJson } from '$lib/server/json-body';
+import { cachedJson } from '$lib/server/cache/cached-json';
+import { readsDrafts } from '$lib/server/evenings/access';
 import { loadEvening } from '$lib/server/evenings/load';
 import { answer, eveningIdOf } from '$lib/server/evenings/respond';
-import { saveRunOrder } from '$lib/server/evenings/run-order';
+import { refuseStaleSave, saveRunOrder } from '$lib/server/evenings/run-order';
 import { runOrderSave } from '$lib/schemas/evening';
 import type { RequestHandler } from './$types';
 
 export const GET = ((event) => {
 	const user = requireRight(event, 'readEvenings');
-	const evening = loadEvening(eveningIdOf(event.params));
-	if (!evening || !mayRead(user, evening))
-		return json({ error: 'There is no such evening.' }, { status: 404 });
-	return json({ runOrderVersion: evening.runOrderVersion, entries: evening.entries });
+	const id = eveningIdOf(event.params);
+	// Everyone who may read drafts gets the same answer, and so does everyone who may not.
+	const drafts = readsDrafts(user);
+	const found = cachedJson(`run order ${id} ${drafts}`, () => {
+		const evening = loadEvening(id);
+		if (!evening || !(evening.published || drafts)) return null;
+		return { runOrderVersion: evening.runOrderVersion, entries: evening.entries };
+	});
+	return found ?? json({ error: 'There is no such evening.' }, { status: 404 });
 }) satisfies RequestHandler;
 
 /** Replaces the run order; a stale `version` gets 409 with the current one and nothing changes. */
 export const PUT = (async (event) => {
 	requireRight(event, 'evenings');
 	const id = eveningIdOf(event.params);
-	const body = await readJson(event.request, runOrderSave);
-	if (!body.ok) return body.response;
+	const raw = await readJsonValue(event.request);
+	if (!raw.ok) return raw.response;
 	return answer(() => {
+		// When several people save at once most saves are stale, and a stale save is refused
+		// whatever its entries hold, so the version is checked before the entries are.
+		const version = (raw.data as { version?: unknown } | null)?.version;
+		if (Number.isSafeInteger(version)) refuseStaleSave(id, version);
+		const body = validateJson(raw.data, runOrderSave);
+		if (!body.ok) return body.response;
 		const saved = saveRunOrder(id, body.data.version, body.data.entries);
 		const evening = loadEvening(id)!;
 		return json({ ...saved, entries: evening.entries });
