@@ -34,6 +34,15 @@ closeDb();
 
 const server = await startInstance({ port: PORT, ...opts });
 const BASE = server.base;
+const died = (code: number | null, signal: string | null) => {
+	console.error(
+		`\nThe server stopped (${signal ?? `exit ${code}`}) during the benchmark:\n${server.log().slice(-4000)}`
+	);
+	process.exit(1);
+};
+server.proc.once('exit', died);
+// Whatever ends this script (an error in a callback included), the server goes with it.
+process.once('exit', () => server.proc.kill('SIGKILL'));
 const memoryMb = (field: 'VmHWM' | 'VmRSS') => {
 	const status = readFileSync(`/proc/${server.proc.pid}/status`, 'utf8');
 	return Number(status.match(new RegExp(`${field}:\\s+(\\d+)`))?.[1] ?? 0) / 1024;
@@ -263,6 +272,7 @@ try {
 		`\nserver memory: ${startMb.toFixed(0)} MB resident after start, peak (VmHWM) ${memoryMb('VmHWM').toFixed(0)} MB`
 	);
 } finally {
+	server.proc.off('exit', died);
 	await kill(server);
 	rmSync(dir, { recursive: true, force: true });
 }

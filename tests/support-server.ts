@@ -16,6 +16,15 @@ export async function startInstance(opts: {
 	env?: Record<string, string>;
 }): Promise<Instance> {
 	const base = `http://127.0.0.1:${opts.port}`;
+	// A server left over on this port would answer the health check below in place of ours.
+	if (
+		await fetch(`${base}/healthz`).then(
+			() => true,
+			() => false
+		)
+	) {
+		throw new Error(`Something already answers on port ${opts.port}; stop it first.`);
+	}
 	let output = '';
 	const proc = spawn(process.execPath, [`${process.env.FLOORSET_BUILD_DIR ?? 'build'}/index.js`], {
 		env: {

@@ -1,7 +1,7 @@
 // A published evening's page is read by a hall full of dancers scanning the same QR code, nearly
 // all signed out, and every one of them gets the same page. That page is rendered once per
 // database change and then served as it was. Only signed-out GETs of the public evening pages
-// are kept (no cookie of ours, no query), and only when no write overlapped the rendering. The
+// are kept (no session cookie, no query), and only when no write overlapped the rendering. The
 // Content-Security-Policy uses hashes (svelte.config.js), not a per-response nonce, so a page
 // served twice weakens nothing.
 import type { Handle } from '@sveltejs/kit';
@@ -32,7 +32,7 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 		event.request.method !== 'GET' ||
 		event.locals.user ||
 		event.url.search ||
-		cookie.includes('authjs.') ||
+		cookie.includes('authjs.session-token') ||
 		!PUBLIC_PAGE.test(event.url.pathname)
 	) {
 		return resolve(event);
