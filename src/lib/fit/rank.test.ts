@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { TeamVerdict } from './fit-score';
 import { fitTrackToDance } from './fit-score';
@@ -41,6 +42,35 @@ describe('rankFits', () => {
 		const two = rankFits(d, [tooFast, rated, perfect, unmeasured, alsoPerfect], null, null, 2);
 		expect(two).toEqual(all.slice(0, 2));
 		expect(rankFits(d, [perfect], null, null, 0)).toEqual([]);
+	});
+	it('a short list picked from a long one is the head of the fully sorted list (property)', () => {
+		// The reference is the plain full sort (the path taken when most of the list is shown);
+		// many equal scores and verdicts make the id tie-break matter.
+		const arb = fc.record({
+			tempos: fc.array(fc.constantFrom(null, 96, 112, 118, 120, 122, 128, 140, 160), {
+				minLength: 16,
+				maxLength: 400
+			}),
+			verdictEvery: fc.integer({ min: 2, max: 9 }),
+			idSeed: fc.integer({ min: 1, max: 2 ** 30 }),
+			fraction: fc.double({ min: 0, max: 0.12, noNaN: true })
+		});
+		fc.assert(
+			fc.property(arb, ({ tempos, verdictEvery, idSeed, fraction }) => {
+				// Distinct ids in a scrambled order (a multiplicative step modulo a prime).
+				const tracks = tempos.map((bpm, i) => track({ id: 1 + ((i * idSeed) % 10_007), bpm }));
+				const verdicts = new Map<number, TeamVerdict>();
+				tracks.forEach((t, i) => {
+					if (i % verdictEvery === 0)
+						verdicts.set(t.id, { verdict: i % 2 ? 'fits' : 'does-not-fit' });
+				});
+				const limit = Math.max(1, Math.floor(tracks.length * fraction));
+				const head = rankFits(d, tracks, verdicts, null, limit).map((i) => i.trackId);
+				const all = rankFits(d, tracks, verdicts).map((i) => i.trackId);
+				expect(head).toEqual(all.slice(0, limit));
+			}),
+			{ numRuns: 150, seed: 20261202 }
+		);
 	});
 	it('applies the settings: a wider rate bound lets a faster track in', () => {
 		const narrow = rankFits(d, [track({ id: 1, bpm: 140 })])[0];

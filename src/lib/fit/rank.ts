@@ -28,13 +28,70 @@ function group(verdict: TeamVerdict | null): number {
 /**
  * Order n candidates by (group, score desc, id) and return the first `limit` indices. Scores are
  * rounded to 3 decimals and lie in 0..1, so one number per candidate carries group and score.
+ * A short list from a long one (50 of 10,000 tracks) is picked with a bounded heap, which looks at
+ * each candidate once instead of sorting them all.
  */
 function order(keys: Float64Array, ids: Float64Array, limit: number): Uint32Array {
 	const n = keys.length;
-	const idx = new Uint32Array(n);
-	for (let i = 0; i < n; i++) idx[i] = i;
-	idx.sort((a, b) => keys[a] - keys[b] || ids[a] - ids[b]);
-	return limit < n ? idx.subarray(0, limit) : idx;
+	const before = (a: number, b: number) => keys[a] - keys[b] || ids[a] - ids[b];
+	if (limit * 8 >= n) {
+		const idx = new Uint32Array(n);
+		for (let i = 0; i < n; i++) idx[i] = i;
+		idx.sort(before);
+		return limit < n ? idx.subarray(0, limit) : idx;
+	}
+	const heap = new BoundedWorstFirst(limit, before);
+	for (let i = 0; i < n; i++) heap.offer(i);
+	return heap.drain().sort(before);
+}
+
+/** The `size` best indices seen so far, the worst of them at the root (a binary max-heap). */
+class BoundedWorstFirst {
+	#items: Uint32Array;
+	#count = 0;
+
+	constructor(
+		readonly size: number,
+		readonly before: (a: number, b: number) => number
+	) {
+		this.#items = new Uint32Array(size);
+	}
+
+	offer(i: number) {
+		const h = this.#items;
+		if (this.#count < this.size) {
+			let at = this.#count++;
+			h[at] = i;
+			while (at > 0) {
+				const up = (at - 1) >> 1;
+				if (this.before(h[up], h[at]) >= 0) break;
+				[h[up], h[at]] = [h[at], h[up]];
+				at = up;
+			}
+		} else if (this.size > 0 && this.before(i, h[0]) < 0) {
+			h[0] = i;
+			this.#siftDown();
+		}
+	}
+
+	#siftDown() {
+		const h = this.#items;
+		let at = 0;
+		for (;;) {
+			const l = at * 2 + 1;
+			const r = l + 1;
+			let worst = at;
+			if (l < this.#count && this.before(h[l], h[worst]) > 0) worst = l;
+			if (r < this.#count && this.before(h[r], h[worst]) > 0) worst = r;
+			if (worst === at) return;
+			[h[worst], h[at]] = [h[at], h[worst]];
+			at = worst;
+		}
+	}
+
+	drain(): Uint32Array {
+		return this.#items.subarray(0, this.#count);
+	}
 }
 
 function normalLimit(limit: number | null | undefined, n: number): number {
