@@ -5,7 +5,7 @@ import { EveningError } from './errors';
 import { loadEvening } from './load';
 import { entriesOf, planAndSave, planFor } from './plan';
 import { planInputFor } from './plan-input';
-import { saveRunOrder } from './run-order';
+import { refuseStaleSave, saveRunOrder } from './run-order';
 import { runOrderSave } from '../../schemas/evening';
 import { seedLike } from './test-fixture';
 import { updateEvening } from './write';
@@ -77,6 +77,13 @@ describe('run-order save', () => {
 		// An announcement with no length given gets the default minute.
 		expect(saved[2].durationS).toBe(60);
 		expect(saved[1].locked).toBe(true);
+	});
+
+	test('the early check: the current version passes, an older one is 409, no evening is 404', () => {
+		const v = loadEvening(1)!.runOrderVersion;
+		expect(status(() => refuseStaleSave(1, v))).toBe(200);
+		expect(status(() => refuseStaleSave(1, v - 1))).toBe(409);
+		expect(status(() => refuseStaleSave(999, v))).toBe(404);
 	});
 
 	test('two editors: the second save with the old version gets 409 and the first is kept', () => {

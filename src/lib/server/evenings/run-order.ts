@@ -1,6 +1,7 @@
 // Saving a run order: the whole list at once, refused (409) when the version is stale so that two
 // people editing at once never overwrite each other; start times are recomputed here.
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { DEFAULT_DURATION_S, recomputeStarts } from '../../components/evening/timing';
 import type { EntryInput } from '../../schemas/evening';
 import { db } from '../db';
@@ -34,17 +35,73 @@ function refuseStale(
 
 // When several people save at once most saves are stale: the route refuses them before it
 // validates their entries or opens a transaction (saveRunOrder checks again inside it).
-const storedVersion = preparedFor((d) =>
-	d
-		.select({ runOrderVersion: evenings.runOrderVersion })
-		.from(evenings)
-		.where(eq(evenings.id, sql.placeholder('id')))
-		.prepare()
-);
+const inIds = (column: SQLiteColumn, name: string) =>
+	sql`${column} IN (SELECT value FROM json_each(${sql.placeholder(name)}))`;
+
+const statements = preparedFor((d) => {
+	const p = (name: string) => sql.placeholder(name);
+	return {
+		version: d
+			.select({ runOrderVersion: evenings.runOrderVersion })
+			.from(evenings)
+			.where(eq(evenings.id, p('id')))
+			.prepare(),
+		evening: d
+			.select()
+			.from(evenings)
+			.where(eq(evenings.id, p('id')))
+			.prepare(),
+		sections: d
+			.select()
+			.from(sections)
+			.where(eq(sections.eveningId, p('id')))
+			.prepare(),
+		// Lists of ids travel as one JSON array (json_each), so the statements stay prepared.
+		dances: d.select({ id: dances.id }).from(dances).where(inIds(dances.id, 'ids')).prepare(),
+		tracks: d
+			.select({ id: tracks.id, durationS: tracks.durationS })
+			.from(tracks)
+			.where(inIds(tracks.id, 'ids'))
+			.prepare(),
+		refused: d
+			.select({ trackId: fits.trackId, danceId: fits.danceId })
+			.from(fits)
+			.where(
+				and(
+					eq(fits.verdict, 'does-not-fit'),
+					inIds(fits.trackId, 'trackIds'),
+					inIds(fits.danceId, 'danceIds')
+				)
+			)
+			.prepare(),
+		deleteEntries: d
+			.delete(runOrderEntries)
+			.where(eq(runOrderEntries.eveningId, p('id')))
+			.prepare(),
+		// Building the SQL of a 50-row insert costs more than running 50 prepared ones.
+		insertEntry: d
+			.insert(runOrderEntries)
+			.values({
+				eveningId: p('eveningId'),
+				position: p('position'),
+				kind: p('kind'),
+				sectionId: p('sectionId'),
+				danceId: p('danceId'),
+				trackId: p('trackId'),
+				rate: p('rate'),
+				startS: p('startS'),
+				durationS: p('durationS'),
+				locked: p('locked'),
+				text: p('text'),
+				reasons: p('reasons')
+			})
+			.prepare()
+	};
+});
 
 /** Throws EveningError 404 or 409 unless `version` is the evening's current run-order version. */
 export function refuseStaleSave(eveningId: number, version: unknown) {
-	refuseStale(storedVersion().get({ id: eveningId }), version as number);
+	refuseStale(statements().version.get({ id: eveningId }), version as number);
 }
 
 /**
@@ -57,43 +114,29 @@ export function saveRunOrder(
 	entries: readonly EntryInput[]
 ): SaveResult {
 	return db().transaction((tx) => {
-		const evening = tx.select().from(evenings).where(eq(evenings.id, eveningId)).get();
+		const q = statements();
+		const evening = q.evening.get({ id: eveningId });
 		refuseStale(evening, version);
-		const sectionRows = tx.select().from(sections).where(eq(sections.eveningId, eveningId)).all();
+		const sectionRows = q.sections.all({ id: eveningId });
 		const sectionIds = new Set(sectionRows.map((s) => s.id));
 		for (const e of entries) {
 			if (e.sectionId != null && !sectionIds.has(e.sectionId))
 				throw new EveningError(`Section ${e.sectionId} is not part of this evening.`, 422);
 		}
 		const danceIds = ids(entries.map((e) => e.danceId));
-		const known = danceIds.length
-			? tx.select({ id: dances.id }).from(dances).where(inArray(dances.id, danceIds)).all()
-			: [];
+		const known = danceIds.length ? q.dances.all({ ids: JSON.stringify(danceIds) }) : [];
 		if (known.length !== danceIds.length)
 			throw new EveningError('An entry names an unknown dance.', 422);
 		const trackIds = ids(entries.map((e) => e.trackId));
-		const trackRows = trackIds.length
-			? tx
-					.select({ id: tracks.id, durationS: tracks.durationS })
-					.from(tracks)
-					.where(inArray(tracks.id, trackIds))
-					.all()
-			: [];
+		const trackRows = trackIds.length ? q.tracks.all({ ids: JSON.stringify(trackIds) }) : [];
 		if (trackRows.length !== trackIds.length)
 			throw new EveningError('An entry names an unknown track.', 422);
 		const lengthOf = new Map(trackRows.map((t) => [t.id, t.durationS]));
 		if (danceIds.length && trackIds.length) {
-			const refused = tx
-				.select({ trackId: fits.trackId, danceId: fits.danceId })
-				.from(fits)
-				.where(
-					and(
-						eq(fits.verdict, 'does-not-fit'),
-						inArray(fits.trackId, trackIds),
-						inArray(fits.danceId, danceIds)
-					)
-				)
-				.all();
+			const refused = q.refused.all({
+				trackIds: JSON.stringify(trackIds),
+				danceIds: JSON.stringify(danceIds)
+			});
 			const bad = entries.find((e) =>
 				refused.some((r) => r.trackId === e.trackId && r.danceId === e.danceId)
 			);
@@ -119,30 +162,26 @@ export function saveRunOrder(
 			sectionRows.map((s) => ({ id: s.id, startS: (s.startsAt.getTime() - eveningStart) / 1000 })),
 			gapSeconds(evening.planSettings)
 		);
-		tx.delete(runOrderEntries).where(eq(runOrderEntries.eveningId, eveningId)).run();
-		if (rows.length) {
-			tx.insert(runOrderEntries)
-				.values(
-					rows.map((e, position) => ({
-						eveningId,
-						position,
-						kind: e.kind,
-						sectionId: e.sectionId ?? null,
-						danceId:
-							e.kind === 'dance' || e.kind === 'teach' || e.kind === 'walkthrough'
-								? (e.danceId ?? null)
-								: null,
-						trackId: e.kind === 'dance' || e.kind === 'teach' ? (e.trackId ?? null) : null,
-						rate: e.rate,
-						startS: Math.round(starts[position] * 1000) / 1000,
-						durationS: Math.round(e.durationS * 1000) / 1000,
-						locked: e.locked,
-						text: e.text,
-						reasons: e.reasons
-					}))
-				)
-				.run();
-		}
+		q.deleteEntries.run({ id: eveningId });
+		rows.forEach((e, position) => {
+			q.insertEntry.run({
+				eveningId,
+				position,
+				kind: e.kind,
+				sectionId: e.sectionId ?? null,
+				danceId:
+					e.kind === 'dance' || e.kind === 'teach' || e.kind === 'walkthrough'
+						? (e.danceId ?? null)
+						: null,
+				trackId: e.kind === 'dance' || e.kind === 'teach' ? (e.trackId ?? null) : null,
+				rate: e.rate,
+				startS: Math.round(starts[position] * 1000) / 1000,
+				durationS: Math.round(e.durationS * 1000) / 1000,
+				locked: e.locked,
+				text: e.text,
+				reasons: e.reasons
+			});
+		});
 		const next = version + 1;
 		const bumped = tx
 			.update(evenings)
