@@ -3,28 +3,26 @@
 // music table and the same dance's fits; each ranking or page is computed once per change.
 import { db } from '../db';
 import { changeStamp } from './change-stamp';
-import { replayBytes } from './replay';
+import { KeptBody } from './kept-body';
 import { StampedCache } from './stamped-cache';
 
 const encoder = new TextEncoder();
 
 /** 32 MB of kept answers at most: a few hundred music-table pages. */
-export const jsonCache = new StampedCache<Uint8Array>(32 * 1024 * 1024);
+export const jsonCache = new StampedCache<KeptBody>(32 * 1024 * 1024);
 
 /**
  * A JSON response for `key`, computed by `compute` at most once per database change; null (not
  * kept) when `compute` finds nothing to answer, so the route can say what is missing.
  */
-export function cachedJson(key: string, compute: () => unknown): Response | null {
+export function cachedJson(request: Request, key: string, compute: () => unknown): Response | null {
 	const stamp = changeStamp(db().$client);
 	let body = jsonCache.get(key, stamp);
 	if (!body) {
 		const value = compute();
 		if (value == null) return null;
-		body = encoder.encode(JSON.stringify(value));
+		body = new KeptBody(encoder.encode(JSON.stringify(value)));
 		jsonCache.set(key, stamp, body);
 	}
-	return replayBytes(body, {
-		headers: { 'content-type': 'application/json', 'content-length': String(body.byteLength) }
-	});
+	return body.respond(request, { headers: { 'content-type': 'application/json' } });
 }

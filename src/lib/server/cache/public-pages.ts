@@ -7,13 +7,13 @@
 import type { Handle } from '@sveltejs/kit';
 import { db } from '../db';
 import { changeStamp } from './change-stamp';
-import { replayBytes } from './replay';
+import { KeptBody } from './kept-body';
 import { StampedCache } from './stamped-cache';
 
 interface KeptPage {
 	status: number;
 	headers: [string, string][];
-	body: Uint8Array;
+	body: KeptBody;
 	byteLength: number;
 }
 
@@ -24,7 +24,8 @@ const rendering = new Map<string, Promise<KeptPage | null>>();
 
 const PUBLIC_PAGE = /^\/e\/[A-Za-z0-9_-]{1,64}(\/poster)?$/;
 
-const replay = (p: KeptPage) => replayBytes(p.body, { status: p.status, headers: p.headers });
+const replay = (p: KeptPage, request: Request) =>
+	p.body.respond(request, { status: p.status, headers: p.headers });
 
 export const keepPublicPages: Handle = async ({ event, resolve }) => {
 	const cookie = event.request.headers.get('cookie') ?? '';
@@ -40,13 +41,13 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 	const key = event.url.pathname;
 	const stamp = changeStamp(db().$client);
 	const kept = publicPages.get(key, stamp);
-	if (kept) return replay(kept);
+	if (kept) return replay(kept, event.request);
 	// When the QR code goes up, a hundred phones ask at once: one renders, the rest wait for it.
 	const flight = `${stamp} ${key}`;
 	const pending = rendering.get(flight);
 	if (pending) {
 		const page = await pending;
-		if (page) return replay(page);
+		if (page) return replay(page, event.request);
 		return resolve(event);
 	}
 	let settle!: (page: KeptPage | null) => void;
@@ -62,15 +63,16 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 		) {
 			return response;
 		}
-		const body = new Uint8Array(await response.arrayBuffer());
+		const body = new KeptBody(new Uint8Array(await response.arrayBuffer()));
 		page = {
 			status: response.status,
-			headers: [...response.headers],
+			// Length and encoding are set for each reply, by the form it goes out in.
+			headers: [...response.headers].filter(([name]) => name !== 'content-length'),
 			body,
 			byteLength: body.byteLength
 		};
 		publicPages.set(key, stamp, page);
-		return replay(page);
+		return replay(page, event.request);
 	} finally {
 		rendering.delete(flight);
 		settle(page);

@@ -17,7 +17,9 @@ export const GET = ((event) => {
 	const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
 	if (!parsed.success) return badRequest(describeIssue(parsed.error));
 	try {
-		return cachedJson(`tracks ${JSON.stringify(parsed.data)}`, () => listTracks(parsed.data))!;
+		return cachedJson(event.request, `tracks ${JSON.stringify(parsed.data)}`, () =>
+			listTracks(parsed.data)
+		)!;
 	} catch (e) {
 		if (e instanceof BadCursorError) return badRequest(e.message);
 		throw e;

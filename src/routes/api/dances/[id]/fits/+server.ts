@@ -10,7 +10,7 @@ export const GET = ((event) => {
 	const id = idParam(event.params.id);
 	const limit = parseLimit(event.url.searchParams.get('limit'));
 	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
-	const found = cachedJson(`dance fits ${id} ${limit}`, () => {
+	const found = cachedJson(event.request, `dance fits ${id} ${limit}`, () => {
 		const result = id ? fitsForDance(id, limit) : null;
 		return result && { dance: result.dance, items: result.items };
 	});

@@ -14,7 +14,7 @@ export const GET = ((event) => {
 	const id = eveningIdOf(event.params);
 	// Everyone who may read drafts gets the same answer, and so does everyone who may not.
 	const drafts = readsDrafts(user);
-	const found = cachedJson(`run order ${id} ${drafts}`, () => {
+	const found = cachedJson(event.request, `run order ${id} ${drafts}`, () => {
 		const evening = loadEvening(id);
 		if (!evening || !(evening.published || drafts)) return null;
 		return { runOrderVersion: evening.runOrderVersion, entries: evening.entries };

@@ -10,7 +10,7 @@ export const GET = ((event) => {
 	const id = idParam(event.params.id);
 	const limit = parseLimit(event.url.searchParams.get('limit'));
 	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
-	const found = cachedJson(`track fits ${id} ${limit}`, () =>
+	const found = cachedJson(event.request, `track fits ${id} ${limit}`, () =>
 		id ? fitsForTrack(id, limit) : null
 	);
 	return found ?? badRequest('No such track.', 404);

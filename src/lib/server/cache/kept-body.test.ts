@@ -1,0 +1,59 @@
+// Accept-Encoding as RFC 9110 §12.5.3 defines it (codings, q-values, "*"), and the gzip form read
+// back with Node's own zlib (gunzip), the reference implementation of RFC 1952.
+import { gunzipSync } from 'node:zlib';
+import { describe, expect, test } from 'vitest';
+import { acceptsGzip, KeptBody } from './kept-body';
+
+describe('acceptsGzip', () => {
+	test.each([
+		['gzip, deflate, br', true],
+		['br;q=1.0, gzip;q=0.8, *;q=0.1', true],
+		['GZIP', true],
+		['gzip;q=0', false],
+		['gzip;q=0.000', false],
+		['br, *', true],
+		['br, *;q=0', false],
+		['*;q=0.5, gzip;q=0', false],
+		['identity', false],
+		['', false],
+		[null, false]
+	])('%s → %s', (header, expected) => {
+		expect(acceptsGzip(header)).toBe(expected);
+	});
+});
+
+describe('KeptBody', () => {
+	const text = JSON.stringify(Array.from({ length: 200 }, (_, i) => ({ id: i, title: 'Reel' })));
+	const kept = new KeptBody(new TextEncoder().encode(text));
+	const ask = (encoding?: string) =>
+		new Request('http://127.0.0.1/x', encoding ? { headers: { 'accept-encoding': encoding } } : {});
+
+	test('plain bytes for a client that does not accept gzip', async () => {
+		const res = kept.respond(ask(), {
+			headers: { 'content-type': 'application/json', etag: '"a1"' }
+		});
+		expect(res.headers.get('content-encoding')).toBeNull();
+		expect(res.headers.get('vary')).toBe('accept-encoding');
+		expect(res.headers.get('etag')).toBe('"a1"');
+		expect(Number(res.headers.get('content-length'))).toBe(kept.bytes.byteLength);
+		expect(await res.text()).toBe(text);
+	});
+
+	test('gzip that zlib reads back to the same bytes, with its own length and ETag', async () => {
+		const res = kept.respond(ask('gzip, br'), { headers: { etag: '"a1"' } });
+		expect(res.headers.get('content-encoding')).toBe('gzip');
+		expect(res.headers.get('etag')).toBe('"a1-gzip"');
+		const bytes = new Uint8Array(await res.arrayBuffer());
+		expect(bytes.byteLength).toBe(Number(res.headers.get('content-length')));
+		expect(bytes.byteLength).toBeLessThan(kept.bytes.byteLength / 4);
+		expect(gunzipSync(bytes).toString('utf8')).toBe(text);
+		expect(kept.gzip()).toBe(kept.gzip());
+	});
+
+	test('a small body goes out as it is', async () => {
+		const small = new KeptBody(new TextEncoder().encode('{"ok":true}'));
+		const res = small.respond(ask('gzip'), { headers: {} });
+		expect(res.headers.get('content-encoding')).toBeNull();
+		expect(await res.text()).toBe('{"ok":true}');
+	});
+});
