@@ -14,11 +14,10 @@ interface KeptPage {
 	status: number;
 	headers: [string, string][];
 	body: KeptBody;
-	byteLength: number;
 }
 
 /** 16 MB: hundreds of evenings' pages. */
-export const publicPages = new StampedCache<KeptPage>(16 * 1024 * 1024);
+export const publicPages = new StampedCache<KeptPage>(16 * 1024 * 1024, (p) => p.body.byteLength);
 
 const rendering = new Map<string, Promise<KeptPage | null>>();
 
@@ -63,13 +62,11 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 		) {
 			return response;
 		}
-		const body = new KeptBody(new Uint8Array(await response.arrayBuffer()));
 		page = {
 			status: response.status,
 			// Length and encoding are set for each reply, by the form it goes out in.
 			headers: [...response.headers].filter(([name]) => name !== 'content-length'),
-			body,
-			byteLength: body.byteLength
+			body: new KeptBody(new Uint8Array(await response.arrayBuffer()))
 		};
 		publicPages.set(key, stamp, page);
 		return replay(page, event.request);

@@ -33,19 +33,13 @@ function refuseStale(
 	}
 }
 
-// When several people save at once most saves are stale: the route refuses them before it
-// validates their entries or opens a transaction (saveRunOrder checks again inside it).
+// Lists of ids travel as one JSON array (json_each), so the statements stay prepared.
 const inIds = (column: SQLiteColumn, name: string) =>
 	sql`${column} IN (SELECT value FROM json_each(${sql.placeholder(name)}))`;
 
 const statements = preparedFor((d) => {
 	const p = (name: string) => sql.placeholder(name);
 	return {
-		version: d
-			.select({ runOrderVersion: evenings.runOrderVersion })
-			.from(evenings)
-			.where(eq(evenings.id, p('id')))
-			.prepare(),
 		evening: d
 			.select()
 			.from(evenings)
@@ -56,7 +50,6 @@ const statements = preparedFor((d) => {
 			.from(sections)
 			.where(eq(sections.eveningId, p('id')))
 			.prepare(),
-		// Lists of ids travel as one JSON array (json_each), so the statements stay prepared.
 		dances: d.select({ id: dances.id }).from(dances).where(inIds(dances.id, 'ids')).prepare(),
 		tracks: d
 			.select({ id: tracks.id, durationS: tracks.durationS })
@@ -99,9 +92,13 @@ const statements = preparedFor((d) => {
 	};
 });
 
-/** Throws EveningError 404 or 409 unless `version` is the evening's current run-order version. */
-export function refuseStaleSave(eveningId: number, version: unknown) {
-	refuseStale(statements().version.get({ id: eveningId }), version as number);
+/**
+ * Throws EveningError 404 or 409 unless `version` is the evening's current run-order version.
+ * When several people save at once most saves are stale: the route refuses them with this before
+ * it validates their entries or opens a transaction (saveRunOrder checks again inside it).
+ */
+export function refuseStaleSave(eveningId: number, version: number) {
+	refuseStale(statements().evening.get({ id: eveningId }), version);
 }
 
 /**

@@ -32,7 +32,7 @@ export const PUT = (async (event) => {
 		// When several people save at once most saves are stale, and a stale save is refused
 		// whatever its entries hold, so the version is checked before the entries are.
 		const version = (raw.data as { version?: unknown } | null)?.version;
-		if (Number.isSafeInteger(version)) refuseStaleSave(id, version);
+		if (typeof version === 'number' && Number.isSafeInteger(version)) refuseStaleSave(id, version);
 		const body = validateJson(raw.data, runOrderSave);
 		if (!body.ok) return body.response;
 		const saved = saveRunOrder(id, body.data.version, body.data.entries);
