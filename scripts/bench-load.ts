@@ -3,7 +3,7 @@
 // and run-order saves (each connection reads the run order and saves it back) — against a database
 // of 10,000 tracks and 800 dances; then the two APIs again at 50 connections with a new question
 // every request, so that nothing kept from an earlier answer helps. Prints requests per second,
-// median and 99th-percentile latency, errors, lost saves and the server's memory (peak resident
+// median, 99th-percentile and longest latency, errors, lost saves and the server's memory (peak resident
 // size during each run). Requests accept gzip as browsers do, except the saves' reads, which the
 // benchmark itself parses. The load generator shares the machine's two cores with the server.
 // BENCH_SECONDS (default 30) sets each run's length. Needs `npm run build` first.
@@ -67,6 +67,8 @@ interface Row {
 	rps: number;
 	p50: number;
 	p99: number;
+	/** The slowest request: a connection left waiting shows here long before it times out. */
+	max: number;
 	errors: number;
 	non2xx: number;
 	rssMb?: number;
@@ -104,6 +106,7 @@ async function hammer(
 		rps: Math.round(result.requests.average),
 		p50: result.latency.p50,
 		p99: result.latency.p99,
+		max: result.latency.max,
 		errors: result.errors + result.timeouts,
 		non2xx: result.non2xx
 	});
@@ -207,6 +210,7 @@ async function saves(connections: number, cookie: string) {
 		rps: Math.round(result.requests.average),
 		p50: result.latency.p50,
 		p99: result.latency.p99,
+		max: result.latency.max,
 		errors: result.errors + result.timeouts + errors,
 		non2xx: conflicts,
 		note: `the PUTs alone: p50 ${Math.round(latencies[Math.floor(latencies.length * 0.5)] ?? 0)} ms, p99 ${Math.round(latencies[Math.floor(latencies.length * 0.99)] ?? 0)} ms; ${accepted} accepted, ${conflicts} stale (409), lost ${Math.max(0, -unanswered)}, ${Math.max(0, unanswered)} stored with the answer cut off by the end of the run, final run order = a save as sent: ${asSaved}`
@@ -256,6 +260,7 @@ try {
 		'   req/s',
 		'  p50 ms',
 		'  p99 ms',
+		'  max ms',
 		' errors',
 		' non-2xx',
 		' RSS MB'
@@ -267,6 +272,7 @@ try {
 			String(r.rps).padStart(8),
 			String(r.p50).padStart(8),
 			String(r.p99).padStart(8),
+			String(Math.round(r.max)).padStart(8),
 			String(r.errors).padStart(7),
 			String(r.non2xx).padStart(8),
 			String(Math.round(r.rssMb ?? 0)).padStart(7),
