@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type Browser, type Page } from '@playwright/test';
 import { signIn, type DemoRole } from './helpers';
 
 // What each demo role should see in the main navigation (DESIGN.md, "People and roles").
@@ -50,14 +50,13 @@ test('a wrong password gets one message that does not tell whether the account e
 	}
 });
 
-test('an admin invites someone, who sets a password from the e-mailed link and signs in', async ({
-	page,
-	browser
-}) => {
-	const email = `newcomer-${Date.now()}@floorset.test`;
-	await signIn(page, 'admin');
+/**
+ * An admin (signed in on `page`) invites a dancer, who sets a password from the e-mailed link and
+ * signs in on a page of their own, which is returned with the link.
+ */
+async function inviteAndJoin(page: Page, browser: Browser, name: string, email: string) {
 	await page.goto('/admin/people');
-	await page.getByLabel('Name').fill('Ada Newcombe');
+	await page.getByLabel('Name').fill(name);
 	await page.getByLabel('E-mail').fill(email);
 	// A dancer, so the team's DJ and instructor counts other tests rely on stay as seeded.
 	await page.getByRole('button', { name: 'Send invitation' }).click();
@@ -79,15 +78,75 @@ test('an admin invites someone, who sets a password from the e-mailed link and s
 	await guest.getByLabel('E-mail').fill(email);
 	await guest.getByLabel('Password').fill('a-long-new-password');
 	await guest.getByRole('button', { name: 'Sign in' }).click();
-	await expect(guest.getByTestId('who')).toContainText('Ada Newcombe · dancer');
+	await expect(guest.getByTestId('who')).toContainText(`${name} · dancer`);
+	return { guest, link: link! };
+}
+
+test('an admin invites someone, who sets a password from the e-mailed link and signs in', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, 'admin');
+	const { guest, link } = await inviteAndJoin(
+		page,
+		browser,
+		'Ada Newcombe',
+		`newcomer-${Date.now()}@floorset.test`
+	);
 
 	// The link works once.
-	const again = await guest.goto(link!);
+	const again = await guest.goto(link);
 	expect(again?.status()).toBe(404);
 
 	await guest.getByRole('button', { name: 'Sign out' }).click();
 	await expect(guest.getByRole('link', { name: 'Sign in' })).toBeVisible();
 	await guest.close();
+});
+
+test('an admin withdraws access: the person is signed out at once and cannot sign in again', async ({
+	page,
+	browser
+}) => {
+	const email = `leaver-${Date.now()}@floorset.test`;
+	await signIn(page, 'admin');
+	const { guest } = await inviteAndJoin(page, browser, 'Tam Leaver', email);
+
+	await page.goto('/admin/people');
+	const row = page.getByRole('listitem').filter({ hasText: email });
+	await row.getByText('Withdraw access…').click();
+	await row.getByRole('button', { name: "Withdraw Tam Leaver's access" }).click();
+	await expect(page.getByRole('status')).toHaveText('Access withdrawn.');
+	await expect(row).toContainText(`${email} · no access`);
+	await expect(row.getByText('Withdraw access…')).toHaveCount(0);
+
+	// The session they hold grants nothing from the next request on.
+	await guest.goto('/evenings');
+	await expect(guest).toHaveURL(/\/signin/);
+	await guest.getByLabel('E-mail').fill(email);
+	await guest.getByLabel('Password').fill('a-long-new-password');
+	await guest.getByRole('button', { name: 'Sign in' }).click();
+	await expect(guest.getByRole('alert')).toBeVisible();
+	await expect(guest.getByTestId('who')).toHaveCount(0);
+	await guest.close();
+
+	// An admin cannot withdraw their own access, and nonsense is refused with a message.
+	const own = await page.request.get('/api/me');
+	const me = (await own.json()) as { id: number };
+	for (const [userId, message] of [
+		[String(me.id), 'You cannot withdraw your own access.'],
+		['not-a-number', 'Choose a person.'],
+		['99999999', 'There is no such person.']
+	]) {
+		const res = await page.request.post('/admin/people?/withdraw', {
+			form: { userId },
+			headers: { origin: new URL(page.url()).origin, 'x-sveltekit-action': 'true' }
+		});
+		const body = await res.json();
+		expect([400, 404], userId).toContain(body.status);
+		expect(JSON.stringify(body.data), userId).toContain(message);
+	}
+	await page.goto('/admin/people');
+	await expect(page.getByTestId('who')).toBeVisible();
 });
 
 test('the safe floors page is open to everyone and cites the WHO standard', async ({ page }) => {

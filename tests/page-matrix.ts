@@ -67,6 +67,7 @@ export const ACTIONS: ActionRow[] = [
 	{ route: '/e/[token]', action: 'request', path: '/e/{share}', allowed: 'public' },
 	{ route: '/admin/people', action: 'invite', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'roles', path: '/admin/people', allowed: ['admin'] },
+	{ route: '/admin/people', action: 'withdraw', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/dances/new', action: 'save', path: '/dances/new', allowed: ['instructor'] },
 	{ route: '/dances/[id]/edit', action: 'save', path: '/dances/1/edit', allowed: ['instructor'] },
 	{

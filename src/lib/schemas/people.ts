@@ -27,3 +27,10 @@ export const rolesSchema = z.object({
 	userId: z.coerce.number().int().positive(),
 	roles: roleList
 });
+
+export const withdrawSchema = z.object({
+	userId: z.coerce
+		.number({ error: 'Choose a person.' })
+		.int('Choose a person.')
+		.positive('Choose a person.')
+});

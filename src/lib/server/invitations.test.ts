@@ -9,7 +9,14 @@ import {
 } from './invitations';
 import { startCatcher } from './mail/catcher';
 import { verifyPassword } from './passwords';
-import { createUser, findUserByEmail, rolesOf } from './users';
+import {
+	createUser,
+	findUserByEmail,
+	listPeople,
+	rolesOf,
+	sessionUser,
+	withdrawAccess
+} from './users';
 import { makeTestDb } from './testing/test-db';
 
 let t: ReturnType<typeof makeTestDb>;
@@ -20,14 +27,11 @@ beforeEach(async () => {
 afterEach(() => t.cleanup());
 
 const tokenOf = (link: string) => link.split('/invite/')[1];
+const makeAdmin = () =>
+	createUser({ email: 'a@floorset.test', name: 'A', passwordHash: 'x', roles: ['admin'] });
 
 test('an invitation is mailed through SMTP, captured, and its link sets a password once', async () => {
-	const admin = createUser({
-		email: 'a@floorset.test',
-		name: 'A',
-		passwordHash: 'x',
-		roles: ['admin']
-	});
+	const admin = makeAdmin();
 	const { link } = await invite({
 		email: 'New.Person@Floorset.test',
 		name: 'New Person',
@@ -50,12 +54,7 @@ test('an invitation is mailed through SMTP, captured, and its link sets a passwo
 });
 
 test('an expired invitation is not found', async () => {
-	const admin = createUser({
-		email: 'a@floorset.test',
-		name: 'A',
-		passwordHash: 'x',
-		roles: ['admin']
-	});
+	const admin = makeAdmin();
 	const now = Date.now();
 	const { link } = await invite({
 		email: 'b@floorset.test',
@@ -69,12 +68,7 @@ test('an expired invitation is not found', async () => {
 });
 
 test('nobody can be invited twice once they have an account', async () => {
-	const admin = createUser({
-		email: 'a@floorset.test',
-		name: 'A',
-		passwordHash: 'x',
-		roles: ['admin']
-	});
+	const admin = makeAdmin();
 	await expect(
 		invite({ email: 'A@floorset.test', name: 'A again', roles: ['dj'], invitedBy: admin.id })
 	).rejects.toThrow('already has an account');
@@ -82,4 +76,55 @@ test('nobody can be invited twice once they have an account', async () => {
 
 test('a malformed token is refused without a query', () => {
 	expect(findOpenInvitation('../../etc/passwd')).toBeNull();
+});
+
+test('withdrawn access ends the session at once, voids an unused link, and a new invitation gives it back with its own roles', async () => {
+	const admin = makeAdmin();
+	const dj = createUser({ email: 'dj@floorset.test', name: 'D', passwordHash: 'x', roles: ['dj'] });
+	const spare = await invite({
+		email: 'dj@floorset.test',
+		name: 'D',
+		roles: ['dj'],
+		invitedBy: admin.id
+	}).catch((e: unknown) => e);
+	expect(spare).toBeInstanceOf(InvitationError); // an active account cannot be invited
+	expect(sessionUser(dj.id)?.roles).toEqual(['dj']);
+
+	const pending = await invite({
+		email: 'p@floorset.test',
+		name: 'P',
+		roles: ['dj'],
+		invitedBy: admin.id
+	});
+	const invitee = createUser({
+		email: 'p@floorset.test',
+		name: 'P',
+		passwordHash: null,
+		roles: []
+	});
+	expect(listPeople().find((p) => p.id === invitee.id)?.access).toBe('invited');
+
+	expect(withdrawAccess(dj.id)).toBe(true);
+	expect(withdrawAccess(invitee.id)).toBe(true);
+	expect(withdrawAccess(9999)).toBe(false);
+	expect(sessionUser(dj.id)).toBeNull();
+	expect(rolesOf(dj.id)).toEqual([]);
+	expect(findUserByEmail('dj@floorset.test')?.passwordHash).toBeNull();
+	// The link mailed before the withdrawal no longer lets anyone in.
+	expect(findOpenInvitation(tokenOf(pending.link))).toBeNull();
+	expect(listPeople().map((p) => [p.email, p.access])).toEqual([
+		['a@floorset.test', 'active'],
+		['dj@floorset.test', 'none'],
+		['p@floorset.test', 'none']
+	]);
+
+	const back = await invite({
+		email: 'dj@floorset.test',
+		name: 'D',
+		roles: ['instructor'],
+		invitedBy: admin.id
+	});
+	expect(listPeople().find((p) => p.id === dj.id)?.access).toBe('invited');
+	expect(await acceptInvitation(tokenOf(back.link), 'a long password')).toBe(dj.id);
+	expect(sessionUser(dj.id)?.roles).toEqual(['instructor']);
 });

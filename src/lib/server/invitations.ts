@@ -7,7 +7,7 @@ import { db } from './db';
 import { invitations, users } from './db/schema';
 import { sendMail } from './mail/send';
 import { hashPassword } from './passwords';
-import { createUser, findUserByEmail, normaliseEmail } from './users';
+import { createUser, findUserByEmail, normaliseEmail, setRoles } from './users';
 
 export const INVITATION_DAYS = 7;
 
@@ -88,7 +88,9 @@ export async function acceptInvitation(token: string, password: string, now = Da
 		const existing = findUserByEmail(inv.email);
 		if (existing) {
 			if (existing.passwordHash) throw new InvitationError('That person already has an account.');
+			// Someone known before (their access was withdrawn): the new invitation's roles hold.
 			tx.update(users).set({ passwordHash }).where(eq(users.id, existing.id)).run();
+			setRoles(existing.id, inv.roles as Role[]);
 			return existing.id;
 		}
 		return createUser({

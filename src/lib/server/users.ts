@@ -1,11 +1,11 @@
 // People and their roles.
-import { eq, sql } from 'drizzle-orm';
+import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import { ROLES, type Role } from '../domain';
 import { db } from './db';
 import { preparedFor } from './db/prepared';
 import { changeStamp } from './cache/change-stamp';
 import { StampedCache } from './cache/stamped-cache';
-import { userRoles, users } from './db/schema';
+import { invitations, userRoles, users } from './db/schema';
 
 export interface SessionUser {
 	id: number;
@@ -86,13 +86,47 @@ export function createUser(input: {
 	});
 }
 
-export function listPeople() {
+/** Whether a person can sign in, has been invited and not yet joined, or has no way in. */
+export type Access = 'active' | 'invited' | 'none';
+
+export function listPeople(now = Date.now()) {
 	const all = db().select().from(users).orderBy(users.name).all();
-	return all.map((u) => ({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		active: u.passwordHash !== null,
-		roles: rolesOf(u.id)
-	}));
+	const invited = new Set(
+		db()
+			.select({ email: invitations.email })
+			.from(invitations)
+			.where(and(isNull(invitations.acceptedAt), gt(invitations.expiresAt, new Date(now))))
+			.all()
+			.map((i) => i.email)
+	);
+	return all.map((u) => {
+		const access: Access = u.passwordHash ? 'active' : invited.has(u.email) ? 'invited' : 'none';
+		return {
+			id: u.id,
+			email: u.email,
+			name: u.name,
+			active: access === 'active',
+			access,
+			roles: rolesOf(u.id)
+		};
+	});
+}
+
+/**
+ * Takes a person's way in away at once: their password, their roles and any invitation not yet
+ * used. The next request their browser sends is signed out (the session is checked against the
+ * database on every request). What they made (tracks, dances, evenings) stays. An invitation
+ * gives access back. False when there is no such person.
+ */
+export function withdrawAccess(userId: number): boolean {
+	return db().transaction((tx) => {
+		const user = tx.select({ email: users.email }).from(users).where(eq(users.id, userId)).get();
+		if (!user) return false;
+		tx.update(users).set({ passwordHash: null }).where(eq(users.id, userId)).run();
+		tx.delete(userRoles).where(eq(userRoles.userId, userId)).run();
+		tx.delete(invitations)
+			.where(and(eq(invitations.email, user.email), isNull(invitations.acceptedAt)))
+			.run();
+		return true;
+	});
 }

@@ -1,8 +1,8 @@
 import { fail } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
 import { invite, InvitationError } from '$lib/server/invitations';
-import { listPeople, setRoles } from '$lib/server/users';
-import { inviteSchema, rolesSchema } from '$lib/schemas/people';
+import { listPeople, setRoles, withdrawAccess } from '$lib/server/users';
+import { inviteSchema, rolesSchema, withdrawSchema } from '$lib/schemas/people';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = ((event) => {
@@ -45,5 +45,19 @@ export const actions = {
 		}
 		setRoles(parsed.data.userId, parsed.data.roles);
 		return { saved: parsed.data.userId };
+	},
+	withdraw: async (event) => {
+		const me = requireRight(event, 'people');
+		const form = await event.request.formData();
+		const parsed = withdrawSchema.safeParse({ userId: form.get('userId') });
+		if (!parsed.success) return fail(400, { rolesMessage: parsed.error.issues[0]?.message });
+		// So that the team always keeps an admin: the one acting.
+		if (parsed.data.userId === me.id) {
+			return fail(400, { rolesMessage: 'You cannot withdraw your own access.' });
+		}
+		if (!withdrawAccess(parsed.data.userId)) {
+			return fail(404, { rolesMessage: 'There is no such person.' });
+		}
+		return { withdrawn: parsed.data.userId };
 	}
 } satisfies Actions;
