@@ -1,13 +1,14 @@
 // Sign-in with Auth.js: e-mail and password (Credentials), sessions as signed JWT cookies that
-// carry the person's id. Roles are read fresh from the database on every request (hooks), so a
-// change of roles takes effect at once.
+// carry the person's id and a stamp of their password. Roles are read fresh from the database on
+// every request (hooks), so a change of roles takes effect at once; a password set again (after
+// access was withdrawn) voids the sessions from before.
 import { SvelteKitAuth, type SvelteKitAuthConfig } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { z } from 'zod';
 import { authSecret, config } from '$lib/server/config';
 import { decoyHash, verifyPassword } from '$lib/server/passwords';
 import { SESSION_REFRESH_S } from '$lib/server/session-token';
-import { findUserByEmail } from '$lib/server/users';
+import { findUserByEmail, passwordStamp } from '$lib/server/users';
 
 export const credentialsSchema = z.object({
 	email: z
@@ -52,17 +53,31 @@ function authConfig(): SvelteKitAuthConfig {
 						return null;
 					}
 					if (!(await verifyPassword(user.passwordHash, parsed.data.password))) return null;
-					return { id: String(user.id), email: user.email, name: user.name };
+					// The stamp goes into the token: a password set later voids this session.
+					const signedIn = {
+						id: String(user.id),
+						email: user.email,
+						name: user.name,
+						pw: passwordStamp(user.passwordHash)
+					};
+					return signedIn;
 				}
 			})
 		],
 		callbacks: {
 			jwt({ token, user }) {
-				if (user?.id) token.uid = Number(user.id);
+				if (user?.id) {
+					token.uid = Number(user.id);
+					token.pw = (user as { pw?: string }).pw;
+				}
 				return token;
 			},
 			session({ session, token }) {
-				return { ...session, uid: typeof token.uid === 'number' ? token.uid : null };
+				return {
+					...session,
+					uid: typeof token.uid === 'number' ? token.uid : null,
+					pw: typeof token.pw === 'string' ? token.pw : null
+				};
 			}
 		}
 	};

@@ -12,7 +12,7 @@ import { mailIsCaptured } from '$lib/server/mail/send';
 import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
 import { authSecret, config } from '$lib/server/config';
-import { sessionUid } from '$lib/server/session-token';
+import { sessionClaim } from '$lib/server/session-token';
 
 export const init: ServerInit = async () => {
 	if (building) return;
@@ -43,12 +43,12 @@ const onlyOurSignIn: Handle = ({ event, resolve }) => {
 
 const session: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
-	const uid = await sessionUid(
+	const claim = await sessionClaim(
 		event.cookies,
 		{ secret: authSecret(), secure: config().origin.startsWith('https:') },
 		() => event.locals.auth()
 	);
-	if (uid !== null) event.locals.user = sessionUser(uid);
+	if (claim) event.locals.user = sessionUser(claim.uid, claim.pw);
 	return resolve(event);
 };
 

@@ -13,6 +13,7 @@ import {
 	createUser,
 	findUserByEmail,
 	listPeople,
+	passwordStamp,
 	rolesOf,
 	sessionUser,
 	withdrawAccess
@@ -88,7 +89,8 @@ test('withdrawn access ends the session at once, voids an unused link, and a new
 		invitedBy: admin.id
 	}).catch((e: unknown) => e);
 	expect(spare).toBeInstanceOf(InvitationError); // an active account cannot be invited
-	expect(sessionUser(dj.id)?.roles).toEqual(['dj']);
+	const before = passwordStamp('x');
+	expect(sessionUser(dj.id, before)?.roles).toEqual(['dj']);
 
 	const pending = await invite({
 		email: 'p@floorset.test',
@@ -107,7 +109,7 @@ test('withdrawn access ends the session at once, voids an unused link, and a new
 	expect(withdrawAccess(dj.id)).toBe(true);
 	expect(withdrawAccess(invitee.id)).toBe(true);
 	expect(withdrawAccess(9999)).toBe(false);
-	expect(sessionUser(dj.id)).toBeNull();
+	expect(sessionUser(dj.id, before)).toBeNull();
 	expect(rolesOf(dj.id)).toEqual([]);
 	expect(findUserByEmail('dj@floorset.test')?.passwordHash).toBeNull();
 	// The link mailed before the withdrawal no longer lets anyone in.
@@ -126,5 +128,8 @@ test('withdrawn access ends the session at once, voids an unused link, and a new
 	});
 	expect(listPeople().find((p) => p.id === dj.id)?.access).toBe('invited');
 	expect(await acceptInvitation(tokenOf(back.link), 'a long password')).toBe(dj.id);
-	expect(sessionUser(dj.id)?.roles).toEqual(['instructor']);
+	const after = passwordStamp(findUserByEmail('dj@floorset.test')!.passwordHash!);
+	expect(sessionUser(dj.id, after)?.roles).toEqual(['instructor']);
+	// A session from before the withdrawal stays worthless once access is given back.
+	expect(sessionUser(dj.id, before)).toBeNull();
 });

@@ -8,7 +8,7 @@ import {
 	forgetSessions,
 	SESSION_REFRESH_S,
 	sessionCookieName,
-	sessionUid
+	sessionClaim
 } from './session-token';
 
 const secret = 'test-secret-0123456789abcdef0123456789';
@@ -51,20 +51,20 @@ describe('decodeSession', () => {
 	});
 });
 
-describe('sessionUid', () => {
+describe('sessionClaim', () => {
 	const opts = { secret, secure: false };
 
 	test('no cookie: nobody, and Auth.js is not asked', async () => {
 		const viaAuthJs = vi.fn();
-		expect(await sessionUid(cookies({}), opts, viaAuthJs)).toBeNull();
+		expect(await sessionClaim(cookies({}), opts, viaAuthJs)).toBeNull();
 		expect(viaAuthJs).not.toHaveBeenCalled();
 	});
 
 	test('a fresh cookie is read without Auth.js re-issuing it', async () => {
 		const viaAuthJs = vi.fn();
-		const jar = cookies({ [name]: await token({ uid: 3 }) });
-		expect(await sessionUid(jar, opts, viaAuthJs)).toBe(3);
-		expect(await sessionUid(jar, opts, viaAuthJs)).toBe(3);
+		const jar = cookies({ [name]: await token({ uid: 3, pw: 'stamp' }) });
+		expect(await sessionClaim(jar, opts, viaAuthJs)).toEqual({ uid: 3, pw: 'stamp' });
+		expect(await sessionClaim(jar, opts, viaAuthJs)).toEqual({ uid: 3, pw: 'stamp' });
 		expect(viaAuthJs).not.toHaveBeenCalled();
 	});
 
@@ -73,20 +73,28 @@ describe('sessionUid', () => {
 		vi.setSystemTime(new Date('2026-12-01T18:00:00Z'));
 		const old = await token({ uid: 3 }, 14 * 86400);
 		vi.setSystemTime(new Date(Date.parse('2026-12-01T18:00:00Z') + SESSION_REFRESH_S * 1000));
-		const viaAuthJs = vi.fn(async () => ({ uid: 3 }));
-		expect(await sessionUid(cookies({ [name]: old }), opts, viaAuthJs)).toBe(3);
-		expect(await sessionUid(cookies({ [name]: 'garbage' }), opts, viaAuthJs)).toBe(3);
-		expect(await sessionUid(cookies({ [`${name}.0`]: 'part' }), opts, viaAuthJs)).toBe(3);
+		const viaAuthJs = vi.fn(async () => ({ uid: 3, pw: 'stamp' }));
+		const claim = { uid: 3, pw: 'stamp' };
+		expect(await sessionClaim(cookies({ [name]: old }), opts, viaAuthJs)).toEqual(claim);
+		expect(await sessionClaim(cookies({ [name]: 'garbage' }), opts, viaAuthJs)).toEqual(claim);
+		expect(await sessionClaim(cookies({ [`${name}.0`]: 'part' }), opts, viaAuthJs)).toEqual(claim);
 		expect(viaAuthJs).toHaveBeenCalledTimes(3);
 	});
 
+	test('a token from before password stamps names its person with no stamp', async () => {
+		const jar = cookies({ [name]: await token({ uid: 3 }) });
+		expect(await sessionClaim(jar, opts, vi.fn())).toEqual({ uid: 3, pw: null });
+	});
+
 	test('Auth.js finding no session means nobody', async () => {
-		expect(await sessionUid(cookies({ [name]: 'garbage' }), opts, async () => null)).toBeNull();
+		expect(await sessionClaim(cookies({ [name]: 'garbage' }), opts, async () => null)).toBeNull();
 	});
 });
 
 test('dueForRefresh after SESSION_REFRESH_S', () => {
 	const now = Date.now() / 1000;
-	expect(dueForRefresh({ uid: 1, iat: now - 60, exp: now + 1000 })).toBe(false);
-	expect(dueForRefresh({ uid: 1, iat: now - SESSION_REFRESH_S, exp: now + 1000 })).toBe(true);
+	expect(dueForRefresh({ uid: 1, pw: null, iat: now - 60, exp: now + 1000 })).toBe(false);
+	expect(dueForRefresh({ uid: 1, pw: null, iat: now - SESSION_REFRESH_S, exp: now + 1000 })).toBe(
+		true
+	);
 });

@@ -2,7 +2,8 @@
 // decrypts the cookie and then encrypts and sets a fresh one on every request (about 2 ms of CPU,
 // most of a cheap API call). Here the cookie is decrypted once and remembered by its exact text,
 // and Auth.js is asked to re-issue it only when it is due (a day old), the same throttle Auth.js
-// applies to database sessions (`session.updateAge`). Roles are still read fresh on every request.
+// applies to database sessions (`session.updateAge`). Roles are still read fresh on every request,
+// and the token's password stamp is checked against the person's current password.
 import { decode } from '@auth/core/jwt';
 
 /** Auth.js's session cookie; its name is also the key-derivation salt of the token. */
@@ -17,6 +18,8 @@ const MAX_REMEMBERED = 5000;
 
 export interface DecodedSession {
 	uid: number | null;
+	/** The password stamp at sign-in (`passwordStamp`); null in a token from before stamps. */
+	pw: string | null;
 	/** Issued and expires, in seconds since the epoch. */
 	iat: number;
 	exp: number;
@@ -43,6 +46,7 @@ export async function decodeSession(
 	if (!payload || typeof payload.exp !== 'number' || typeof payload.iat !== 'number') return null;
 	const session: DecodedSession = {
 		uid: typeof payload.uid === 'number' ? payload.uid : null,
+		pw: typeof payload.pw === 'string' ? payload.pw : null,
 		iat: payload.iat,
 		exp: payload.exp
 	};
@@ -61,26 +65,34 @@ export const dueForRefresh = (s: DecodedSession) => nowS() - s.iat >= SESSION_RE
 
 type Cookies = { get(name: string): string | undefined; getAll(): { name: string }[] };
 
+/** Who a session says is signed in: their id and the password stamp it was issued under. */
+export interface SessionClaim {
+	uid: number;
+	pw: string | null;
+}
+
+const claimOf = (s: { uid?: unknown; pw?: unknown } | null): SessionClaim | null =>
+	typeof s?.uid === 'number' ? { uid: s.uid, pw: typeof s.pw === 'string' ? s.pw : null } : null;
+
 /**
- * The signed-in person's id from the request's cookies. `viaAuthJs` is Auth.js's own session call
+ * Who the request's cookies say is signed in. `viaAuthJs` is Auth.js's own session call
  * (`event.locals.auth`): used when the cookie is due for re-issue, is split into chunks, or does
  * not decode, so Auth.js re-issues or clears it as it always has.
  */
-export async function sessionUid(
+export async function sessionClaim(
 	cookies: Cookies,
 	opts: { secret: string; secure: boolean },
 	viaAuthJs: () => Promise<unknown>
-): Promise<number | null> {
+): Promise<SessionClaim | null> {
 	const name = sessionCookieName(opts.secure);
 	const token = cookies.get(name);
 	if (token) {
 		const s = await decodeSession(token, opts.secret, name);
-		if (s && !dueForRefresh(s)) return s.uid;
+		if (s && !dueForRefresh(s)) return claimOf(s);
 	} else if (!cookies.getAll().some((c) => c.name.startsWith(`${name}.`))) {
 		return null;
 	}
-	const s = (await viaAuthJs()) as { uid?: unknown } | null;
-	return typeof s?.uid === 'number' ? s.uid : null;
+	return claimOf((await viaAuthJs()) as { uid?: unknown; pw?: unknown } | null);
 }
 
 /** For tests. */

@@ -4,7 +4,10 @@ import { eq } from 'drizzle-orm';
 import { afterEach, beforeEach, expect, test } from 'vitest';
 import { users } from './db/schema';
 import { makeTestDb } from './testing/test-db';
-import { createUser, sessionUser, setRoles } from './users';
+import { createUser, passwordStamp, sessionUser as sessionUserStamped, setRoles } from './users';
+
+// Sessions issued under the password 'x'.
+const sessionUser = (id: number) => sessionUserStamped(id, passwordStamp('x'));
 
 let t: ReturnType<typeof makeTestDb>;
 beforeEach(() => (t = makeTestDb()));
@@ -38,4 +41,22 @@ test('the kept person cannot be changed by one request for the others', () => {
 	const user = sessionUser(id)!;
 	expect(() => user.roles.push('admin')).toThrow(TypeError);
 	expect(sessionUser(id)?.roles).toEqual(['dj']);
+});
+
+test('a session counts only under the password it was issued with', () => {
+	const { id } = createUser({
+		email: 'b@example.test',
+		name: 'B',
+		passwordHash: 'x',
+		roles: ['dj']
+	});
+	expect(sessionUserStamped(id, passwordStamp('x'))?.id).toBe(id);
+	// A token from before stamps, or from an earlier password.
+	expect(sessionUserStamped(id, null)).toBeNull();
+	expect(sessionUserStamped(id, passwordStamp('y'))).toBeNull();
+	t.db.update(users).set({ passwordHash: 'y' }).where(eq(users.id, id)).run();
+	expect(sessionUserStamped(id, passwordStamp('x'))).toBeNull();
+	expect(sessionUserStamped(id, passwordStamp('y'))?.id).toBe(id);
+	// The stamp gives nothing of the hash away in length or alphabet worth keeping.
+	expect(passwordStamp('x')).toMatch(/^[A-Za-z0-9_-]{22}$/);
 });

@@ -1,4 +1,5 @@
 // People and their roles.
+import { createHash } from 'node:crypto';
 import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import { ROLES, type Role } from '../domain';
 import { db } from './db';
@@ -38,23 +39,37 @@ export function rolesOf(userId: number): Role[] {
 	return ROLES.filter((r) => rows.some((row) => row.role === r));
 }
 
-// Who is signed in, kept until the database next changes (a role given or taken is a change).
-const signedIn = new StampedCache<SessionUser | null>(10_000, () => 1);
+/**
+ * A short fingerprint of a person's password hash, carried in their session. Setting a password
+ * (a new one, or again after their access was withdrawn) makes the sessions issued before it
+ * worthless, as Django does with its session auth hash. The hash is salted, so the same password
+ * set again gives a new stamp.
+ */
+export const passwordStamp = (passwordHash: string) =>
+	createHash('sha256').update(passwordHash).digest('base64url').slice(0, 22);
 
-export function sessionUser(userId: number): SessionUser | null {
-	return signedIn.through(String(userId), changeStamp(db().$client), () => readSessionUser(userId));
+// Who is signed in, kept until the database next changes (a role given or taken is a change).
+const signedIn = new StampedCache<{ user: SessionUser; stamp: string } | null>(10_000, () => 1);
+
+/** The person a session names, or null when they have no way in or the session predates their password. */
+export function sessionUser(userId: number, stamp: string | null): SessionUser | null {
+	const known = signedIn.through(String(userId), changeStamp(db().$client), () =>
+		readSessionUser(userId)
+	);
+	return known && known.stamp === stamp ? known.user : null;
 }
 
-function readSessionUser(userId: number): SessionUser | null {
+function readSessionUser(userId: number) {
 	const user = statements().user.get({ id: userId });
 	if (!user || !user.passwordHash) return null;
 	// Shared by every request until the next write: frozen, so no request can change it for others.
-	return Object.freeze({
+	const frozen: SessionUser = Object.freeze({
 		id: user.id,
 		email: user.email,
 		name: user.name,
 		roles: Object.freeze(rolesOf(user.id)) as Role[]
 	});
+	return { user: frozen, stamp: passwordStamp(user.passwordHash) };
 }
 
 export function setRoles(userId: number, roles: readonly Role[]) {
