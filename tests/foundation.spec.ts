@@ -149,6 +149,68 @@ test('an admin withdraws access: the person is signed out at once and cannot sig
 	await expect(page.getByTestId('who')).toBeVisible();
 });
 
+test('a member who forgot their password sets a new one by e-mail, and their other sessions end', async ({
+	page,
+	browser
+}) => {
+	const email = `forgetful-${Date.now()}@floorset.test`;
+	await signIn(page, 'admin');
+	// Signed in on one device (`elsewhere`), they ask for a link on another.
+	const { guest: elsewhere } = await inviteAndJoin(page, browser, 'Pip Forgetful', email);
+	const other = await browser.newPage();
+	await other.goto('/signin');
+	await other.getByRole('link', { name: 'Forgot your password?' }).click();
+	await other.getByLabel('E-mail').fill(email);
+	await other.getByRole('button', { name: 'Send the link' }).click();
+	await expect(other.getByRole('status')).toContainText(`If ${email} belongs to someone`);
+
+	// An unknown address gets the very same answer.
+	await other.goto('/signin/forgot');
+	await other.getByLabel('E-mail').fill(`nobody-${Date.now()}@floorset.test`);
+	await other.getByRole('button', { name: 'Send the link' }).click();
+	await expect(other.getByRole('status')).toContainText('belongs to someone on the team');
+
+	// The mail is sent in the background: look until it is in the outbox.
+	let link: string | undefined;
+	await expect
+		.poll(async () => {
+			await page.goto('/admin/outbox');
+			const message = page
+				.getByTestId('outbox-message')
+				.filter({ hasText: email })
+				.filter({ hasText: 'Set a new Floorset password' });
+			if ((await message.count()) === 0) return undefined;
+			await message.first().locator('summary').click();
+			link = (await message.first().locator('pre').innerText()).match(
+				/https?:\/\/\S+\/reset\/\S+/
+			)?.[0];
+			return link;
+		})
+		.toBeTruthy();
+
+	await other.goto(link!);
+	await other.getByLabel('New password').fill('a-second-long-password');
+	await other.getByLabel('The same again').fill('a-second-long-passwort');
+	await other.getByRole('button', { name: 'Set password' }).click();
+	await expect(other.getByRole('alert')).toHaveText('The two passwords differ.');
+	await other.getByLabel('New password').fill('a-second-long-password');
+	await other.getByLabel('The same again').fill('a-second-long-password');
+	await other.getByRole('button', { name: 'Set password' }).click();
+	await expect(other).toHaveURL(/\/signin\?reset=1/);
+	await expect(other.getByRole('status')).toHaveText('Your new password is set. Sign in with it.');
+	await other.getByLabel('E-mail').fill(email);
+	await other.getByLabel('Password').fill('a-second-long-password');
+	await other.getByRole('button', { name: 'Sign in' }).click();
+	await expect(other.getByTestId('who')).toContainText('Pip Forgetful · dancer');
+
+	// The session from before the reset is over; the link does not work twice.
+	await elsewhere.goto('/evenings');
+	await expect(elsewhere).toHaveURL(/\/signin/);
+	expect((await other.goto(link!))?.status()).toBe(404);
+	await elsewhere.close();
+	await other.close();
+});
+
 test('the safe floors page is open to everyone and cites the WHO standard', async ({ page }) => {
 	await page.goto('/');
 	await page.getByRole('link', { name: 'Safe floors' }).click();

@@ -353,6 +353,27 @@ const TABLE: Hostile[] = [
 		body: { form: { email: `${'a'.repeat(10_000)}@x.test`, password: 'x' } }
 	},
 	{
+		what: 'a password-reset request for something that is not an e-mail address',
+		as: 'anon',
+		method: 'POST',
+		path: '/signin/forgot',
+		body: { form: { email: "' OR 1=1 --" } }
+	},
+	{
+		what: 'a new password through a made-up reset link',
+		as: 'anon',
+		method: 'POST',
+		path: '/reset/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA',
+		body: { form: { password: 'a long new password', confirm: 'a long new password' } }
+	},
+	{
+		what: 'withdrawing the access of a person id that is negative',
+		as: 'admin',
+		method: 'POST',
+		path: '/admin/people?/withdraw',
+		body: { form: { userId: '-1' } }
+	},
+	{
 		what: 'an invitation with a right-to-left override in the name',
 		as: 'admin',
 		method: 'POST',

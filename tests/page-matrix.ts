@@ -29,6 +29,8 @@ const TEAM_READERS = ['dj', 'instructor', 'organiser'] as const;
 export const PAGES: PageRow[] = [
 	{ route: '/', path: '/', allowed: 'public' },
 	{ route: '/signin', path: '/signin', allowed: 'public' },
+	{ route: '/signin/forgot', path: '/signin/forgot', allowed: 'public' },
+	{ route: '/reset/[token]', path: '/reset/not-a-real-reset-token-12345', allowed: 'public' },
 	{ route: '/safe-floors', path: '/safe-floors', allowed: 'public' },
 	{ route: '/invite/[token]', path: '/invite/not-a-real-invitation-token-123', allowed: 'public' },
 	{ route: '/e/[token]', path: '/e/{share}', allowed: 'public' },
@@ -57,6 +59,13 @@ export const PAGES: PageRow[] = [
 // Actions are posted with an empty form: the allowed get a validation answer, never a change.
 export const ACTIONS: ActionRow[] = [
 	{ route: '/signin', action: 'default', path: '/signin', allowed: 'public' },
+	{ route: '/signin/forgot', action: 'default', path: '/signin/forgot', allowed: 'public' },
+	{
+		route: '/reset/[token]',
+		action: 'default',
+		path: '/reset/not-a-real-reset-token-12345',
+		allowed: 'public'
+	},
 	{ route: '/signout', action: 'default', path: '/signout', allowed: 'public' },
 	{
 		route: '/invite/[token]',

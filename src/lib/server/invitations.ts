@@ -1,19 +1,17 @@
 // One-time invitation links: the token is only in the e-mail; we keep its SHA-256.
-import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, gt, isNull } from 'drizzle-orm';
 import type { Role } from '../domain';
 import { config } from './config';
 import { db } from './db';
 import { invitations, users } from './db/schema';
 import { sendMail } from './mail/send';
+import { hashToken, LinkError, looksLikeToken, newToken } from './one-time-token';
 import { hashPassword } from './passwords';
 import { createUser, findUserByEmail, normaliseEmail, setRoles } from './users';
 
 export const INVITATION_DAYS = 7;
 
-const sha256 = (token: string) => createHash('sha256').update(token).digest('hex');
-
-export class InvitationError extends Error {}
+export class InvitationError extends LinkError {}
 
 export async function invite(input: {
 	email: string;
@@ -25,7 +23,7 @@ export async function invite(input: {
 	const email = normaliseEmail(input.email);
 	const existing = findUserByEmail(email);
 	if (existing?.passwordHash) throw new InvitationError('That person already has an account.');
-	const token = randomBytes(32).toString('base64url');
+	const { token, hash } = newToken();
 	const now = input.now ?? Date.now();
 	db()
 		.insert(invitations)
@@ -33,7 +31,7 @@ export async function invite(input: {
 			email,
 			name: input.name,
 			roles: input.roles,
-			tokenHash: sha256(token),
+			tokenHash: hash,
 			invitedBy: input.invitedBy,
 			expiresAt: new Date(now + INVITATION_DAYS * 86_400_000)
 		})
@@ -57,14 +55,14 @@ export async function invite(input: {
 
 /** The open invitation behind a token, or null when it is unknown, used or expired. */
 export function findOpenInvitation(token: string, now = Date.now()) {
-	if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return null;
+	if (!looksLikeToken(token)) return null;
 	return (
 		db()
 			.select()
 			.from(invitations)
 			.where(
 				and(
-					eq(invitations.tokenHash, sha256(token)),
+					eq(invitations.tokenHash, hashToken(token)),
 					isNull(invitations.acceptedAt),
 					gt(invitations.expiresAt, new Date(now))
 				)

@@ -6,7 +6,7 @@ import { db } from './db';
 import { preparedFor } from './db/prepared';
 import { changeStamp } from './cache/change-stamp';
 import { StampedCache } from './cache/stamped-cache';
-import { invitations, userRoles, users } from './db/schema';
+import { invitations, passwordResets, userRoles, users } from './db/schema';
 
 export interface SessionUser {
 	id: number;
@@ -128,8 +128,8 @@ export function listPeople(now = Date.now()) {
 }
 
 /**
- * Takes a person's way in away at once: their password, their roles and any invitation not yet
- * used. The next request their browser sends is signed out (the session is checked against the
+ * Takes a person's way in away at once: their password, their roles and any invitation or
+ * password-reset link not yet used. The next request their browser sends is signed out (the session is checked against the
  * database on every request). What they made (tracks, dances, evenings) stays. An invitation
  * gives access back. False when there is no such person.
  */
@@ -141,6 +141,9 @@ export function withdrawAccess(userId: number): boolean {
 		tx.delete(userRoles).where(eq(userRoles.userId, userId)).run();
 		tx.delete(invitations)
 			.where(and(eq(invitations.email, user.email), isNull(invitations.acceptedAt)))
+			.run();
+		tx.delete(passwordResets)
+			.where(and(eq(passwordResets.userId, userId), isNull(passwordResets.usedAt)))
 			.run();
 		return true;
 	});

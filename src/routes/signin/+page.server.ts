@@ -13,7 +13,15 @@ const safeTarget = (to: string | null) => (to && /^\/(?!\/)/.test(to) ? to : '/'
 export const load = ((event) => {
 	publicRoute(event);
 	if (event.locals.user) redirect(303, safeTarget(event.url.searchParams.get('redirectTo')));
-	return { redirectTo: safeTarget(event.url.searchParams.get('redirectTo')) };
+	const q = event.url.searchParams;
+	return {
+		redirectTo: safeTarget(q.get('redirectTo')),
+		notice: q.has('reset')
+			? 'Your new password is set. Sign in with it.'
+			: q.has('welcome')
+				? 'Your password is set. Sign in with it.'
+				: null
+	};
 }) satisfies PageServerLoad;
 
 export const actions = {

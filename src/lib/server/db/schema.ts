@@ -72,6 +72,23 @@ export const invitations = sqliteTable(
 	(t) => [index('invitations_email').on(t.email)]
 );
 
+/** One-time links to set a new password, asked for on the sign-in page ("Forgot your password?"). */
+export const passwordResets = sqliteTable(
+	'password_resets',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		userId: integer('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		/** SHA-256 of the one-time token; the token itself is only ever in the e-mail. */
+		tokenHash: text('token_hash').notNull().unique(),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		usedAt: integer('used_at', { mode: 'timestamp_ms' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('password_resets_user').on(t.userId, t.createdAt)]
+);
+
 /** Failed sign-ins, for rate limiting per account and per address. */
 export const signInFailures = sqliteTable(
 	'sign_in_failures',

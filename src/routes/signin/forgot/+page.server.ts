@@ -1,0 +1,32 @@
+import { fail } from '@sveltejs/kit';
+import { z } from 'zod';
+import { publicRoute } from '$lib/server/guard';
+import { requestReset, RESET_MINUTES } from '$lib/server/password-resets';
+import type { Actions, PageServerLoad } from './$types';
+
+const askSchema = z.object({
+	email: z
+		.string({ error: 'Enter your e-mail address.' })
+		.trim()
+		.toLowerCase()
+		.max(254, 'That e-mail address is too long.')
+		.email('Enter an e-mail address.')
+});
+
+export const load = ((event) => {
+	publicRoute(event);
+	return { minutes: RESET_MINUTES };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	default: async (event) => {
+		publicRoute(event);
+		const form = await event.request.formData();
+		const email = String(form.get('email') ?? '').slice(0, 254);
+		const parsed = askSchema.safeParse({ email });
+		if (!parsed.success) return fail(400, { email, message: parsed.error.issues[0]?.message });
+		requestReset(parsed.data.email);
+		// The same answer whether or not the address has an account.
+		return { asked: parsed.data.email };
+	}
+} satisfies Actions;
