@@ -11,11 +11,19 @@ import { sendMail } from './mail/send';
 import { hashToken, LinkError, looksLikeToken, newToken } from './one-time-token';
 import { hashPassword } from './passwords';
 import { clearAccount } from './sign-in-limit';
+import { SlidingWindowLimit } from './sliding-window-limit';
 import { findUserByEmail } from './users';
 
 export const RESET_MINUTES = 60;
 /** Links mailed to one person per hour, however often the form is sent. */
 export const RESETS_PER_HOUR = 3;
+
+/**
+ * Asks from one address per hour, whatever addresses they name: one machine cannot make the
+ * team's mailboxes fill with links (each person still gets at most RESETS_PER_HOUR).
+ */
+export const ASKS_PER_ADDRESS_HOUR = 10;
+export const resetAskLimit = new SlidingWindowLimit(ASKS_PER_ADDRESS_HOUR, 3_600_000);
 
 export class ResetError extends LinkError {}
 

@@ -1,5 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { requestKey, SlidingWindowLimit } from './request-limit';
+import { SlidingWindowLimit } from '../sliding-window-limit';
+import { requestKey } from './request-limit';
 
 describe('request rate limit', () => {
 	test('five in ten minutes per key, then refused until the oldest leaves the window', () => {
