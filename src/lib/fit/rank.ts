@@ -1,5 +1,6 @@
 // Ranking fits, best first: the team's "fits" verdicts (as is or at a rate) above every computed
 // guess, then the computed score, and "does not fit" last; ties by id so the order is stable.
+import { Heap } from 'heap-js';
 import type { DanceFacts, TrackFacts } from '../domain';
 import { ReasonMemo } from './fit-reasons';
 import { fitTrackToDance, prepareSettings, type FitItem, type TeamVerdict } from './fit-score';
@@ -40,58 +41,13 @@ function order(keys: Float64Array, ids: Float64Array, limit: number): Uint32Arra
 		idx.sort(before);
 		return limit < n ? idx.subarray(0, limit) : idx;
 	}
-	const heap = new BoundedWorstFirst(limit, before);
-	for (let i = 0; i < n; i++) heap.offer(i);
-	return heap.drain().sort(before);
-}
-
-/** The `size` best indices seen so far, the worst of them at the root (a binary max-heap). */
-class BoundedWorstFirst {
-	#items: Uint32Array;
-	#count = 0;
-
-	constructor(
-		readonly size: number,
-		readonly before: (a: number, b: number) => number
-	) {
-		this.#items = new Uint32Array(size);
+	// The `limit` best seen so far, the worst of them on top, so each newcomer is one comparison.
+	const kept = new Heap<number>((a, b) => before(b, a));
+	for (let i = 0; i < n; i++) {
+		if (kept.length < limit) kept.push(i);
+		else if (limit > 0 && before(i, kept.peek()!) < 0) kept.replace(i);
 	}
-
-	offer(i: number) {
-		const h = this.#items;
-		if (this.#count < this.size) {
-			let at = this.#count++;
-			h[at] = i;
-			while (at > 0) {
-				const up = (at - 1) >> 1;
-				if (this.before(h[up], h[at]) >= 0) break;
-				[h[up], h[at]] = [h[at], h[up]];
-				at = up;
-			}
-		} else if (this.size > 0 && this.before(i, h[0]) < 0) {
-			h[0] = i;
-			this.#siftDown();
-		}
-	}
-
-	#siftDown() {
-		const h = this.#items;
-		let at = 0;
-		for (;;) {
-			const l = at * 2 + 1;
-			const r = l + 1;
-			let worst = at;
-			if (l < this.#count && this.before(h[l], h[worst]) > 0) worst = l;
-			if (r < this.#count && this.before(h[r], h[worst]) > 0) worst = r;
-			if (worst === at) return;
-			[h[worst], h[at]] = [h[at], h[worst]];
-			at = worst;
-		}
-	}
-
-	drain(): Uint32Array {
-		return this.#items.subarray(0, this.#count);
-	}
+	return Uint32Array.from(kept.toArray()).sort(before);
 }
 
 function normalLimit(limit: number | null | undefined, n: number): number {

@@ -42,8 +42,8 @@ export function rolesOf(userId: number): Role[] {
 /**
  * A short fingerprint of a person's password hash, carried in their session. Setting a password
  * (a new one, or again after their access was withdrawn) makes the sessions issued before it
- * worthless, as Django does with its session auth hash. The hash is salted, so the same password
- * set again gives a new stamp.
+ * worthless, as Django does with its session auth hash (from memory). The hash is salted, so
+ * the same password set again gives a new stamp.
  */
 export const passwordStamp = (passwordHash: string) =>
 	createHash('sha256').update(passwordHash).digest('base64url').slice(0, 22);

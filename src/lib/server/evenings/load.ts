@@ -156,8 +156,11 @@ export function loadEntries(eveningId: number, startsAtMs: number): EntryJson[] 
 }
 
 /** One evening with its sections and run order, or null when there is no such evening. */
+/** The evening's own row, as stored (a run-order save checks its version with this). */
+export const eveningRow = (id: number) => statements().evening.get({ eveningId: id });
+
 export function loadEvening(id: number): EveningJson | null {
-	const row = statements().evening.get({ eveningId: id });
+	const row = eveningRow(id);
 	if (!row) return null;
 	return {
 		id: row.id,

@@ -8,6 +8,7 @@ import { db } from '../db';
 import { preparedFor } from '../db/prepared';
 import { dances, evenings, fits, runOrderEntries, sections, tracks } from '../db/schema';
 import { EveningError } from './errors';
+import { eveningRow } from './load';
 import { gapSeconds } from './gap';
 
 export interface SaveResult {
@@ -40,11 +41,6 @@ const inIds = (column: SQLiteColumn, name: string) =>
 const statements = preparedFor((d) => {
 	const p = (name: string) => sql.placeholder(name);
 	return {
-		evening: d
-			.select()
-			.from(evenings)
-			.where(eq(evenings.id, p('id')))
-			.prepare(),
 		sections: d
 			.select()
 			.from(sections)
@@ -98,7 +94,7 @@ const statements = preparedFor((d) => {
  * it validates their entries or opens a transaction (saveRunOrder checks again inside it).
  */
 export function refuseStaleSave(eveningId: number, version: number) {
-	refuseStale(statements().evening.get({ id: eveningId }), version);
+	refuseStale(eveningRow(eveningId), version);
 }
 
 /**
@@ -112,7 +108,7 @@ export function saveRunOrder(
 ): SaveResult {
 	return db().transaction((tx) => {
 		const q = statements();
-		const evening = q.evening.get({ id: eveningId });
+		const evening = eveningRow(eveningId);
 		refuseStale(evening, version);
 		const sectionRows = q.sections.all({ id: eveningId });
 		const sectionIds = new Set(sectionRows.map((s) => s.id));

@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
 import { readJsonValue, validateJson } from '$lib/server/json-body';
 import { cachedJson } from '$lib/server/cache/cached-json';
-import { readsDrafts } from '$lib/server/evenings/access';
+import { mayRead, readsDrafts } from '$lib/server/evenings/access';
 import { loadEvening } from '$lib/server/evenings/load';
 import { answer, eveningIdOf } from '$lib/server/evenings/respond';
 import { refuseStaleSave, saveRunOrder } from '$lib/server/evenings/run-order';
@@ -16,7 +16,7 @@ export const GET = ((event) => {
 	const drafts = readsDrafts(user);
 	const found = cachedJson(event.request, `run order ${id} ${drafts}`, () => {
 		const evening = loadEvening(id);
-		if (!evening || !(evening.published || drafts)) return null;
+		if (!evening || !mayRead(user, evening)) return null;
 		return { runOrderVersion: evening.runOrderVersion, entries: evening.entries };
 	});
 	return found ?? json({ error: 'There is no such evening.' }, { status: 404 });
