@@ -160,6 +160,9 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	const other = await browser.newPage();
 	await other.goto('/signin');
 	await other.getByRole('link', { name: 'Forgot your password?' }).click();
+	// The sign-in page has an E-mail field too: wait for the new page before filling one in.
+	await expect(other).toHaveURL(/\/signin\/forgot$/);
+	await expect(other.getByRole('button', { name: 'Send the link' })).toBeVisible();
 	await other.getByLabel('E-mail').fill(email);
 	await other.getByRole('button', { name: 'Send the link' }).click();
 	await expect(other.getByRole('status')).toContainText(`If ${email} belongs to someone`);
