@@ -9,7 +9,7 @@ import {
 	type APIRequestContext,
 	type Page
 } from '@playwright/test';
-import { BASE, signIn, signInApi } from './helpers';
+import { BASE, signIn, signInApi, hydrated } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
 
@@ -38,6 +38,7 @@ test('the organiser plans the demo evening, drags and locks an entry, re-plans a
 }) => {
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
+	await hydrated(page);
 	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
 	await page.getByRole('button', { name: /Plan the evening|Re-plan around the locks/ }).click();
 	await expect(page.getByTestId('proposal')).toBeVisible();
@@ -71,6 +72,8 @@ test('the organiser plans the demo evening, drags and locks an entry, re-plans a
 		await page.waitForTimeout(250);
 	}
 	await page.mouse.up();
+	// The drop settles after a short animation; read the order only once the dragged copy is gone.
+	await expect(page.locator('#dnd-action-dragged-el')).toHaveCount(0);
 	let after = await entryNames(page);
 	let at = after.indexOf(moving);
 	const dragged = at > k;
@@ -123,6 +126,7 @@ test('two editors at once: the stale save gets 409 and a reload offer, nothing i
 	await ensureRunOrder(other);
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
+	await hydrated(page);
 	const first = await entryNames(page);
 	// Someone else saves first (one entry fewer) while this page is open.
 	const current = await (await other.get('/api/evenings/1/run-order')).json();
@@ -172,10 +176,12 @@ test('a dancer sees only published evenings and cannot change them', async ({ pa
 
 	await signIn(page, 'dancer');
 	await page.goto('/evenings');
+	await hydrated(page);
 	await expect(page.getByRole('link', { name: 'Lantern Night Social' })).toBeVisible();
 	await expect(page.getByText('New Year Beginners’ Evening')).toHaveCount(0);
 	await expect(page.getByRole('link', { name: 'New evening' })).toHaveCount(0);
 	await page.goto('/evenings/1');
+	await hydrated(page);
 	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
 	await expect(page.getByRole('button', { name: /Plan the evening|Re-plan/ })).toHaveCount(0);
 	await expect(page.getByRole('link', { name: 'Edit the evening' })).toHaveCount(0);
@@ -193,6 +199,7 @@ test('the desk view shows the current entry, the section time left and the sound
 	await page.clock.setFixedTime(new Date('2026-12-11T19:20:00Z'));
 	await signIn(page, 'dj');
 	await page.goto('/evenings/1/desk');
+	await hydrated(page);
 	const now = page.getByTestId('desk-current');
 	await expect(now).toBeVisible();
 	await expect(now).not.toContainText('Nothing playing yet');
@@ -274,6 +281,7 @@ test('the evenings API: create, read, change and delete, with clear refusals', a
 test('the organiser creates, edits and deletes an evening through the forms', async ({ page }) => {
 	await signIn(page, 'organiser');
 	await page.goto('/evenings');
+	await hydrated(page);
 	await page.getByRole('link', { name: 'New evening' }).click();
 	await page.getByLabel('Title', { exact: true }).fill('Thistledown Social');
 	await page.getByLabel('Date').fill('2027-03-12');
@@ -310,6 +318,7 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await api.dispose();
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
+	await hydrated(page);
 	const rows = page.getByTestId('entry');
 	const count = await rows.count();
 	const dance = rows.filter({ has: page.getByRole('button', { name: /^Swap track/ }) }).nth(2);
@@ -348,6 +357,7 @@ test('the run order can be reordered from the keyboard alone', async ({ page }) 
 	await api.dispose();
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
+	await hydrated(page);
 	const names = await entryNames(page);
 	const k = names.findIndex((n, i) => i >= 4 && names.indexOf(n) === names.lastIndexOf(n));
 	// The drag handle takes Space to pick up, arrows to move and Space to put down.
@@ -366,5 +376,5 @@ test('the run order can be reordered from the keyboard alone', async ({ page }) 
 		.nth(k + 1)
 		.getByRole('button', { name: /^Up/ })
 		.click();
-	expect(await entryNames(page)).toEqual(names);
+	await expect.poll(() => entryNames(page)).toEqual(names);
 });

@@ -1,5 +1,5 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { signIn, type DemoRole } from './helpers';
+import { signIn, type DemoRole, hydrated } from './helpers';
 
 // What each demo role should see in the main navigation (DESIGN.md, "People and roles").
 const NAV: Record<DemoRole, string[]> = {
@@ -30,6 +30,7 @@ test('signed out, a page redirects to sign-in and the API answers 401 JSON', asy
 	request
 }) => {
 	await page.goto('/admin/outbox');
+	await hydrated(page);
 	await expect(page).toHaveURL(/\/signin\?redirectTo=%2Fadmin%2Foutbox/);
 	const res = await request.get('/api/me');
 	expect(res.status()).toBe(401);
@@ -41,6 +42,7 @@ test('a wrong password gets one message that does not tell whether the account e
 }) => {
 	for (const email of ['organiser@floorset.test', 'nobody-here@floorset.test']) {
 		await page.goto('/signin');
+		await hydrated(page);
 		await page.getByLabel('E-mail').fill(email);
 		await page.getByLabel('Password').fill('not the password');
 		await page.getByRole('button', { name: 'Sign in' }).click();
@@ -56,6 +58,7 @@ test('a wrong password gets one message that does not tell whether the account e
  */
 async function inviteAndJoin(page: Page, browser: Browser, name: string, email: string) {
 	await page.goto('/admin/people');
+	await hydrated(page);
 	await page.getByLabel('Name').fill(name);
 	await page.getByLabel('E-mail').fill(email);
 	// A dancer, so the team's DJ and instructor counts other tests rely on stay as seeded.
@@ -63,6 +66,7 @@ async function inviteAndJoin(page: Page, browser: Browser, name: string, email: 
 	await expect(page.getByRole('status')).toContainText(`Invitation sent to ${email}`);
 
 	await page.goto('/admin/outbox');
+	await hydrated(page);
 	const message = page.getByTestId('outbox-message').filter({ hasText: email }).first();
 	await message.locator('summary').click();
 	const body = await message.locator('pre').innerText();
@@ -71,10 +75,12 @@ async function inviteAndJoin(page: Page, browser: Browser, name: string, email: 
 
 	const guest = await browser.newPage();
 	await guest.goto(link!);
+	await hydrated(guest);
 	await guest.getByLabel('New password').fill('a-long-new-password');
 	await guest.getByLabel('The same again').fill('a-long-new-password');
 	await guest.getByRole('button', { name: 'Set password' }).click();
 	await expect(guest).toHaveURL(/\/signin/);
+	await hydrated(guest);
 	await guest.getByLabel('E-mail').fill(email);
 	await guest.getByLabel('Password').fill('a-long-new-password');
 	await guest.getByRole('button', { name: 'Sign in' }).click();
@@ -112,6 +118,7 @@ test('an admin withdraws access: the person is signed out at once and cannot sig
 	const { guest } = await inviteAndJoin(page, browser, 'Tam Leaver', email);
 
 	await page.goto('/admin/people');
+	await hydrated(page);
 	const row = page.getByRole('listitem').filter({ hasText: email });
 	await row.getByText('Withdraw access…').click();
 	await row.getByRole('button', { name: "Withdraw Tam Leaver's access" }).click();
@@ -121,6 +128,7 @@ test('an admin withdraws access: the person is signed out at once and cannot sig
 
 	// The session they hold grants nothing from the next request on.
 	await guest.goto('/evenings');
+	await hydrated(guest);
 	await expect(guest).toHaveURL(/\/signin/);
 	await guest.getByLabel('E-mail').fill(email);
 	await guest.getByLabel('Password').fill('a-long-new-password');
@@ -146,6 +154,7 @@ test('an admin withdraws access: the person is signed out at once and cannot sig
 		expect(JSON.stringify(body.data), userId).toContain(message);
 	}
 	await page.goto('/admin/people');
+	await hydrated(page);
 	await expect(page.getByTestId('who')).toBeVisible();
 });
 
@@ -159,16 +168,19 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	const { guest: elsewhere } = await inviteAndJoin(page, browser, 'Pip Forgetful', email);
 	const other = await browser.newPage();
 	await other.goto('/signin');
+	await hydrated(other);
 	await other.getByRole('link', { name: 'Forgot your password?' }).click();
-	// The sign-in page has an E-mail field too: wait for the new page before filling one in.
+	// The sign-in page has an E-mail field too: wait for the new page, live, before filling one in.
 	await expect(other).toHaveURL(/\/signin\/forgot$/);
 	await expect(other.getByRole('button', { name: 'Send the link' })).toBeVisible();
+	await hydrated(other);
 	await other.getByLabel('E-mail').fill(email);
 	await other.getByRole('button', { name: 'Send the link' }).click();
 	await expect(other.getByRole('status')).toContainText(`If ${email} belongs to someone`);
 
 	// An unknown address gets the very same answer.
 	await other.goto('/signin/forgot');
+	await hydrated(other);
 	await other.getByLabel('E-mail').fill(`nobody-${Date.now()}@floorset.test`);
 	await other.getByRole('button', { name: 'Send the link' }).click();
 	await expect(other.getByRole('status')).toContainText('belongs to someone on the team');
@@ -178,6 +190,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	await expect
 		.poll(async () => {
 			await page.goto('/admin/outbox');
+			await hydrated(page);
 			const message = page
 				.getByTestId('outbox-message')
 				.filter({ hasText: email })
@@ -192,6 +205,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 		.toBeTruthy();
 
 	await other.goto(link!);
+	await hydrated(other);
 	await other.getByLabel('New password').fill('a-second-long-password');
 	await other.getByLabel('The same again').fill('a-second-long-passwort');
 	await other.getByRole('button', { name: 'Set password' }).click();
@@ -201,6 +215,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	await other.getByRole('button', { name: 'Set password' }).click();
 	await expect(other).toHaveURL(/\/signin\?reset=1/);
 	await expect(other.getByRole('status')).toHaveText('Your new password is set. Sign in with it.');
+	await hydrated(other);
 	await other.getByLabel('E-mail').fill(email);
 	await other.getByLabel('Password').fill('a-second-long-password');
 	await other.getByRole('button', { name: 'Sign in' }).click();
@@ -208,6 +223,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 
 	// The session from before the reset is over; the link does not work twice.
 	await elsewhere.goto('/evenings');
+	await hydrated(elsewhere);
 	await expect(elsewhere).toHaveURL(/\/signin/);
 	expect((await other.goto(link!))?.status()).toBe(404);
 
@@ -227,6 +243,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 
 test('the safe floors page is open to everyone and cites the WHO standard', async ({ page }) => {
 	await page.goto('/');
+	await hydrated(page);
 	await page.getByRole('link', { name: 'Safe floors' }).click();
 	await expect(page.getByRole('heading', { name: 'Safe floors' })).toBeVisible();
 	// WHO, Global standard for safe listening venues and events (2022): 100 dB LAeq over 15 min.

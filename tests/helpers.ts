@@ -9,8 +9,17 @@ export const ROLES = ['admin', 'organiser', 'dj', 'instructor', 'dancer'] as con
 export type DemoRole = (typeof ROLES)[number];
 export const emailOf = (role: DemoRole) => `${role}@floorset.test`;
 
+/**
+ * Waits until the page's scripts have taken over the server's HTML (the mark is set in
+ * src/routes/+layout.svelte). Before that, Svelte resets fields written as `value={…}` and
+ * `onclick` handlers are not there yet, so typing or clicking may be lost. After a navigation,
+ * first check something only the new page has, or the old page's mark will do.
+ */
+export const hydrated = (page: Page) => expect(page.locator('html[data-hydrated]')).toBeAttached();
+
 export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWORD) {
 	await page.goto('/signin');
+	await hydrated(page);
 	await page.getByLabel('E-mail').fill(emailOf(role));
 	await page.getByLabel('Password').fill(password);
 	await page.getByRole('button', { name: 'Sign in' }).click();

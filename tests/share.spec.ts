@@ -5,7 +5,7 @@ import { expect, request as newRequest, test, type APIRequestContext } from '@pl
 import ICAL from 'ical.js';
 import jsQR from 'jsqr';
 import Papa from 'papaparse';
-import { BASE, signIn, signInApi } from './helpers';
+import { BASE, signIn, signInApi, hydrated } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
 
@@ -181,6 +181,7 @@ test('the organiser unpublishes and publishes again on the evening page: the old
 }) => {
 	await signIn(page, 'organiser');
 	await page.goto(`/evenings/${own}`);
+	await hydrated(page);
 	const share = page.getByRole('region', { name: 'Share' });
 	const link = share.getByTestId('share-url');
 	const oldUrl = (await link.textContent())!.trim();
@@ -216,6 +217,7 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 		await organiser.post(`/api/evenings/${EVENING}/publish`, { headers })
 	).json();
 	await page.goto(shareUrl);
+	await hydrated(page);
 	await expect(page.getByRole('heading', { name: 'Lantern Night Social' })).toBeVisible();
 	await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
 	const qr = page.getByRole('img', { name: /QR code/ });
@@ -254,6 +256,7 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 
 	// The poster prints the same QR code large.
 	await page.goto(`${shareUrl}/poster`);
+	await hydrated(page);
 	await expect(page.getByRole('img', { name: /QR code/ })).toBeVisible();
 	await page.emulateMedia({ media: 'print' });
 	await expect(page.getByRole('button', { name: 'Print this poster' })).toBeHidden();
@@ -266,6 +269,7 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 		const teamPage = await ctx.newPage();
 		await signIn(teamPage, role);
 		await teamPage.goto('/requests');
+		await hydrated(teamPage);
 		await expect(teamPage.getByText('After the tea break, please (e2e)')).toBeVisible();
 		await ctx.close();
 	}
@@ -309,6 +313,7 @@ test('the request form is validated, trapped against bots and rate-limited', asy
 	// The bot's request was never stored; the dancers' were.
 	await signIn(page, 'dj');
 	await page.goto('/requests');
+	await hydrated(page);
 	await expect(page.getByText('Invented Reel 3')).toBeVisible();
 	await expect(page.getByText('bot-e2e')).toHaveCount(0);
 	await expect(page.getByText('Invented Reel 5')).toHaveCount(0);
@@ -326,6 +331,7 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 
 	await signIn(page, 'organiser');
 	await page.goto(`/evenings/${EVENING}`);
+	await hydrated(page);
 	const share = page.getByRole('region', { name: 'Share' });
 	// DJs and instructors are ticked to start with; count who holds those roles now.
 	const team = await (await organiser.get(`/api/evenings/${EVENING}/email`, { headers })).json();
@@ -343,6 +349,7 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 	const admin = await ctx.newPage();
 	await signIn(admin, 'admin');
 	await admin.goto('/admin/outbox');
+	await hydrated(admin);
 	const message = admin
 		.getByTestId('outbox-message')
 		.filter({ hasText: 'Run order: Lantern Night Social' })
@@ -363,6 +370,7 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 test('the print view shows the run sheet and hides the navigation in print', async ({ page }) => {
 	await signIn(page, 'organiser');
 	await page.goto(`/evenings/${own}/print`);
+	await hydrated(page);
 	await expect(page.getByRole('heading', { name: 'Copperlane Share Check' })).toBeVisible();
 	await expect(page.getByRole('table')).toBeVisible();
 	await expect(page.getByText('100 dB LAeq over any 15 minutes')).toBeVisible();
