@@ -105,6 +105,8 @@ test('the DJ edits a track before the page is live: the typed facts are kept and
 	await page.goto('/music/5', { waitUntil: 'domcontentloaded' });
 	await page.getByLabel('Album').fill('Typed before the page was live');
 	await page.getByLabel('Meter').selectOption('3');
+	// Saving needs the script: until it runs, the button cannot send the form the browser's way.
+	await expect(page.getByRole('button', { name: 'Save the facts' })).toBeDisabled();
 	release();
 	await hydrated(page);
 	await expect(page.getByLabel('Album')).toHaveValue('Typed before the page was live');
@@ -121,4 +123,27 @@ test('the DJ edits a track before the page is live: the typed facts are kept and
 		headers: { origin: BASE }
 	});
 	expect(undo.status()).toBe(200);
+});
+
+test('the dance filter typed before the page is live is kept, sends, and Clear empties it', async ({
+	page
+}) => {
+	await signIn(page, 'instructor');
+	const release = await holdScripts(page);
+	await page.goto('/dances', { waitUntil: 'domcontentloaded' });
+	const search = page.getByRole('search');
+	await search.getByLabel('Search').fill('Quillbrook');
+	await search.getByLabel('Level').selectOption('beginner');
+	release();
+	await hydrated(page);
+	await expect(search.getByLabel('Search')).toHaveValue('Quillbrook');
+	await expect(search.getByLabel('Level')).toHaveValue('beginner');
+	await search.getByRole('button', { name: 'Show' }).click();
+	await expect(page).toHaveURL(/q=Quillbrook/);
+	await expect(page).toHaveURL(/level=beginner/);
+	await expect(page.getByRole('link', { name: 'Quillbrook Shuffle' })).toBeVisible();
+	await search.getByRole('link', { name: 'Clear' }).click();
+	await expect(page).toHaveURL(/\/dances$/);
+	await expect(search.getByLabel('Search')).toHaveValue('');
+	await expect(search.getByLabel('Level')).toHaveValue('');
 });
