@@ -3,7 +3,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { applyEnvDefaults } from './env';
+import { applyEnvDefaults, SERVER_NODE_FLAGS } from './env';
 
 applyEnvDefaults();
 
@@ -36,7 +36,10 @@ console.log(`Floorset is serving on ${process.env.ORIGIN}`);
 console.log(
 	'Demo accounts: admin@, organiser@, dj@, instructor@, dancer@floorset.test — password floorset-demo'
 );
-const server = spawn(process.execPath, [built], { stdio: 'inherit', env: process.env });
+const server = spawn(process.execPath, [...SERVER_NODE_FLAGS, built], {
+	stdio: 'inherit',
+	env: process.env
+});
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
 	process.on(signal, () => server.kill(signal));
 }
