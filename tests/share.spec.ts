@@ -275,6 +275,31 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 	}
 });
 
+test('after a refused request, a sent one leaves the form empty for the next', async ({ page }) => {
+	// An evening of its own, so its request limit is untouched by the other tests.
+	const evening = await makeOwnEvening(organiser);
+	try {
+		const { shareUrl } = await (
+			await organiser.post(`/api/evenings/${evening}/publish`, { headers })
+		).json();
+		await page.goto(shareUrl);
+		await hydrated(page);
+		const note = page.getByLabel('A note for the DJ (optional)');
+		const name = page.getByLabel('Or its name');
+		await note.fill('Something slow, please');
+		await page.getByRole('button', { name: 'Send my request' }).click();
+		await expect(page.getByRole('alert')).toBeVisible();
+		await expect(note).toHaveValue('Something slow, please');
+		await name.fill('Invented Slow Reel');
+		await page.getByRole('button', { name: 'Send my request' }).click();
+		await expect(page.getByRole('status')).toHaveText(/Your request is with the DJ/);
+		await expect(name).toHaveValue('');
+		await expect(note).toHaveValue('');
+	} finally {
+		await organiser.delete(`/api/evenings/${evening}`, { headers });
+	}
+});
+
 test('the request form is validated, trapped against bots and rate-limited', async ({ page }) => {
 	const { shareUrl } = await (
 		await organiser.post(`/api/evenings/${own}/publish`, { headers })
