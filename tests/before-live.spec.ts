@@ -83,6 +83,7 @@ test('an organiser starts a new evening before the page is live: every field is 
 	await page.getByLabel('Crowd').selectOption({ index: 2 });
 	const crowd = await page.getByLabel('Crowd').inputValue();
 	await page.getByLabel('Notes').fill('Typed on the bus');
+	const sectionStart = await page.getByLabel('Section 2: from').inputValue();
 	await page.getByLabel('Section 2: from').fill('20:05');
 	release();
 	await hydrated(page);
@@ -93,6 +94,37 @@ test('an organiser starts a new evening before the page is live: every field is 
 	await expect(page.getByLabel('Crowd')).toHaveValue(crowd);
 	await expect(page.getByLabel('Notes')).toHaveValue('Typed on the bus');
 	await expect(page.getByLabel('Section 2: from')).toHaveValue('20:05');
+
+	// And the form still sends (section 2 back where the outline had it, so nothing overlaps).
+	await page.getByLabel('Section 2: from').fill(sectionStart);
+	await page.getByRole('button', { name: 'Create the evening' }).click();
+	await expect(page.getByRole('heading', { name: 'Slow Signal Social' })).toBeVisible();
+	const id = /\/evenings\/(\d+)$/.exec(page.url())?.[1];
+	expect(id).toBeTruthy();
+	const created = await (await page.request.get(`/api/evenings/${id}`)).json();
+	expect(created).toMatchObject({ venue: 'Upper room, Marram Hall', notes: 'Typed on the bus' });
+	const gone = await page.request.delete(`/api/evenings/${id}`, { headers: { origin: BASE } });
+	expect(gone.status()).toBe(204);
+});
+
+test('the evening edit page shows the stored notes before it is live, and keeps what is typed', async ({
+	page
+}) => {
+	await signIn(page, 'organiser');
+	const release = await holdScripts(page);
+	await page.goto('/evenings/1/edit', { waitUntil: 'domcontentloaded' });
+	const notes = page.getByLabel('Notes');
+	// Server-rendered: a form sent before the scripts run must not wipe the stored notes.
+	await expect(notes).toHaveValue(/^Mince pies at the break\./);
+	await notes.fill('Mince pies at the break, typed again on a slow phone.');
+	release();
+	await hydrated(page);
+	await expect(notes).toHaveValue('Mince pies at the break, typed again on a slow phone.');
+	// Nothing was saved; untouched, the stored notes are still there once the page is live.
+	await page.unrouteAll();
+	await page.goto('/evenings/1/edit');
+	await hydrated(page);
+	await expect(notes).toHaveValue(/^Mince pies at the break\./);
 });
 
 test('the DJ edits a track before the page is live: the typed facts are kept and saved', async ({
