@@ -6,7 +6,7 @@ import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { SERVER_NODE_FLAGS } from './env';
+import { serverArgs } from './env';
 
 const TRACKS = 10_000;
 const RUNS = 60;
@@ -169,7 +169,7 @@ async function overHttp() {
 		ORIGIN: origin,
 		AUTH_SECRET: 'bench-only-secret-0123456789abcdef'
 	};
-	const server = spawn(process.execPath, [...SERVER_NODE_FLAGS, `${build}/index.js`], {
+	const server = spawn(process.execPath, serverArgs(build), {
 		env,
 		stdio: 'ignore'
 	});

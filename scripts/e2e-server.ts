@@ -2,7 +2,7 @@
 // demo (the seed's audio cache is shared with `npm start`, so only the first run encodes).
 import { spawn } from 'node:child_process';
 import { rmSync } from 'node:fs';
-import { applyEnvDefaults, SERVER_NODE_FLAGS } from './env';
+import { applyEnvDefaults, serverArgs } from './env';
 
 process.env.PORT = process.env.E2E_PORT ?? '4173';
 const dir = `test-results/e2e-data-${process.env.PORT}`;
@@ -20,10 +20,6 @@ await seed();
 const { db } = await import('../src/lib/server/db');
 db().$client.close();
 
-const server = spawn(
-	process.execPath,
-	[...SERVER_NODE_FLAGS, `${process.env.FLOORSET_BUILD_DIR ?? 'build'}/index.js`],
-	{ stdio: 'inherit', env: process.env }
-);
+const server = spawn(process.execPath, serverArgs(), { stdio: 'inherit', env: process.env });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));

@@ -20,3 +20,9 @@ export function applyEnvDefaults(env: NodeJS.ProcessEnv = process.env) {
  * Measured on this machine, not a general rule: see DEVELOPERS.md for the figures.
  */
 export const SERVER_NODE_FLAGS = ['--max-semi-space-size=32'] as const;
+
+/** Node's arguments for running the built server: its flags, then adapter-node's entry. */
+export const serverArgs = (buildDir = process.env.FLOORSET_BUILD_DIR ?? 'build') => [
+	...SERVER_NODE_FLAGS,
+	`${buildDir}/index.js`
+];

@@ -3,7 +3,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { applyEnvDefaults, SERVER_NODE_FLAGS } from './env';
+import { applyEnvDefaults, serverArgs } from './env';
 
 applyEnvDefaults();
 
@@ -36,7 +36,7 @@ console.log(`Floorset is serving on ${process.env.ORIGIN}`);
 console.log(
 	'Demo accounts: admin@, organiser@, dj@, instructor@, dancer@floorset.test — password floorset-demo'
 );
-const server = spawn(process.execPath, [...SERVER_NODE_FLAGS, built], {
+const server = spawn(process.execPath, serverArgs('build'), {
 	stdio: 'inherit',
 	env: process.env
 });

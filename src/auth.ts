@@ -5,18 +5,14 @@
 import { SvelteKitAuth, type SvelteKitAuthConfig } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { z } from 'zod';
+import { emailAddress } from '$lib/schemas/email';
 import { authSecret, config } from '$lib/server/config';
 import { decoyHash, verifyPassword } from '$lib/server/passwords';
 import { SESSION_REFRESH_S } from '$lib/server/session-token';
 import { findUserByEmail, passwordStamp } from '$lib/server/users';
 
 export const credentialsSchema = z.object({
-	email: z
-		.string()
-		.trim()
-		.toLowerCase()
-		.max(254, 'That e-mail address is too long.')
-		.email('Enter an e-mail address.'),
+	email: emailAddress,
 	password: z.string().min(1, 'Enter your password.').max(200, 'That password is too long.')
 });
 

@@ -2,7 +2,7 @@
 // and upload folder, so SIGKILL never touches the server the other tests use.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { join } from 'node:path';
-import { SERVER_NODE_FLAGS } from '../scripts/env';
+import { serverArgs } from '../scripts/env';
 
 export interface Instance {
 	base: string;
@@ -27,8 +27,7 @@ export async function startInstance(opts: {
 		throw new Error(`Something already answers on port ${opts.port}; stop it first.`);
 	}
 	let output = '';
-	const build = process.env.FLOORSET_BUILD_DIR ?? 'build';
-	const proc = spawn(process.execPath, [...SERVER_NODE_FLAGS, `${build}/index.js`], {
+	const proc = spawn(process.execPath, serverArgs(), {
 		env: {
 			...process.env,
 			PORT: String(opts.port),

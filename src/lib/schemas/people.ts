@@ -1,6 +1,7 @@
 // Shared by the People page's form and the invitations API.
 import { z } from 'zod';
 import { ROLES } from '../domain';
+import { emailAddress } from './email';
 
 export const roleList = z
 	.array(z.enum(ROLES, { message: 'Unknown role.' }))
@@ -8,12 +9,7 @@ export const roleList = z
 	.max(ROLES.length);
 
 export const inviteSchema = z.object({
-	email: z
-		.string()
-		.trim()
-		.toLowerCase()
-		.max(254, 'That e-mail address is too long.')
-		.email('Enter an e-mail address.'),
+	email: emailAddress,
 	name: z
 		.string()
 		.trim()

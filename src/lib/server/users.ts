@@ -129,9 +129,9 @@ export function listPeople(now = Date.now()) {
 
 /**
  * Takes a person's way in away at once: their password, their roles and any invitation or
- * password-reset link not yet used. The next request their browser sends is signed out (the session is checked against the
- * database on every request). What they made (tracks, dances, evenings) stays. An invitation
- * gives access back. False when there is no such person.
+ * password-reset link not yet used. The next request their browser sends is signed out (the
+ * session is checked against the database on every request). What they made (tracks, dances,
+ * evenings) stays. An invitation gives access back. False when there is no such person.
  */
 export function withdrawAccess(userId: number): boolean {
 	return db().transaction((tx) => {

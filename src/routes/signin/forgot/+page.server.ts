@@ -1,17 +1,11 @@
 import { fail } from '@sveltejs/kit';
 import { z } from 'zod';
+import { emailAddress } from '$lib/schemas/email';
 import { publicRoute } from '$lib/server/guard';
 import { requestReset, RESET_MINUTES, resetAskLimit } from '$lib/server/password-resets';
 import type { Actions, PageServerLoad } from './$types';
 
-const askSchema = z.object({
-	email: z
-		.string({ error: 'Enter your e-mail address.' })
-		.trim()
-		.toLowerCase()
-		.max(254, 'That e-mail address is too long.')
-		.email('Enter an e-mail address.')
-});
+const askSchema = z.object({ email: emailAddress });
 
 export const load = ((event) => {
 	publicRoute(event);
