@@ -5,7 +5,6 @@ import { handle as authHandle } from './auth';
 import { keepPublicPages } from '$lib/server/cache/public-pages';
 import { closeDb, db } from '$lib/server/db';
 import { keepHeapNearLive } from '$lib/server/heap';
-import { FairTurns } from '$lib/server/fair-turns';
 import { isApi } from '$lib/server/guard';
 import { startCatcher, stopCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
@@ -60,18 +59,6 @@ const apiNeedsSession: Handle = ({ event, resolve }) => {
 	return resolve(event);
 };
 
-// 5 ms turns: in npm run bench:load the slowest answer at 200 connections fell from 10 s (some
-// timed out) to about 1 s, and throughput held; 2 ms cut the tail further but cost the saves
-// throughput and p99, 10 ms left 1.6 s (npm run bench:turns shows the effect on a bare server).
-const turns = new FairTurns({ targetMs: 5 });
-
-/** Under saturation, requests start in turns so that new connections are accepted too. */
-const fairStart: Handle = async ({ event, resolve }) => {
-	const wait = turns.enter();
-	if (wait) await wait;
-	return resolve(event);
-};
-
 const securityHeaders: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
 	response.headers.set('X-Content-Type-Options', 'nosniff');
@@ -82,7 +69,6 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 };
 
 export const handle = sequence(
-	fairStart,
 	securityHeaders,
 	onlyOurSignIn,
 	authHandle,
