@@ -234,7 +234,8 @@ describe('fit rules', () => {
 		expect(pairs).not.toContain('2:12');
 		// A team verdict outranks a low score; its rate lengthens the entry: 175 ÷ 0.95.
 		const slowed = plan.entries.find((e) => e.trackId === 13);
-		if (slowed) expect(slowed.durationS).toBeCloseTo(175 / 0.95, 9);
+		expect(slowed).toBeDefined();
+		expect(slowed!.durationS).toBeCloseTo(175 / 0.95, 9);
 		expect(checkRunOrder(input, plan.entries).filter((p) => p.rule === 'fit')).toEqual([]);
 	});
 });
