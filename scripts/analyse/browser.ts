@@ -24,6 +24,7 @@ export interface AnalysisLine {
 	tagBpm?: number | null;
 	ms?: number;
 	candidates?: { bpm: number; score: number }[];
+	detected?: number[];
 	timings?: Record<string, number>;
 	error?: string;
 }
@@ -126,6 +127,7 @@ export class Analyser {
 				confidence: number;
 				alternative: number | null;
 				candidates: { bpm: number; score: number }[];
+				detected: number[];
 			};
 		};
 		return {
@@ -143,6 +145,7 @@ export class Analyser {
 			tagBpm: tags.tagBpm,
 			ms: r.ms,
 			candidates: tempo.candidates,
+			detected: tempo.detected,
 			timings: r.timings
 		};
 	}

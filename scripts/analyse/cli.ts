@@ -13,7 +13,7 @@ try {
 	for (const path of files) {
 		const line = await analyser.analyse(path);
 		if (!line.ok) failed++;
-		const { candidates: _c, timings: _t, meter: _m, ...shown } = line;
+		const { candidates: _c, timings: _t, meter: _m, detected: _d, ...shown } = line;
 		console.log(JSON.stringify(shown));
 	}
 } finally {

@@ -19,6 +19,7 @@ const analysis = (bpm: number): FileAnalysis => ({
 		confidence: 0.9,
 		alternative: null,
 		candidates: [{ bpm, score: 1 }],
+		detected: [],
 		source: 'detected',
 		tagAgrees: false
 	},
@@ -51,6 +52,7 @@ function harness(o: { failNames?: string[]; concurrency?: number } = {}) {
 			uploaded.push(file.name);
 			expect(JSON.parse(String(form.get('analysis')))).toMatchObject({
 				bpm: 120,
+				detected: [],
 				source: 'detected',
 				meter: 4
 			});

@@ -49,6 +49,8 @@ export interface FileAnalysis {
 		/** The other metrical level when it is nearly as strong: the DJ should check by ear. */
 		alternative: number | null;
 		candidates: TempoCandidate[];
+		/** web-audio-beat-detector's own answers, one per tempo window that found a beat. */
+		detected: number[];
 		source: 'detected';
 		/** The file's BPM tag is within 4 % of the measured tempo (so the tag can be shown as
 		 * confirmed); a tag that disagrees is reported in tags.tagBpm and otherwise ignored. */
@@ -105,6 +107,7 @@ export async function analyseFile(file: Blob, o: AnalyseOptions = {}): Promise<F
 			confidence: r.confidence,
 			alternative: alternativeOf(r),
 			candidates: r.candidates,
+			detected,
 			source: 'detected',
 			tagAgrees: tags.tagBpm !== null && Math.abs(r.bpm / tags.tagBpm - 1) <= 0.04
 		},
