@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import type { Meter } from '../domain';
 import { generateSong } from '../synth/song';
 import { accuracy1 } from './accuracy';
+import { alternativeOf } from './alternative';
 import { bpmToPeriod, refine } from './comb';
 import { guessMeter } from './meter';
 import { onsetEnvelope, type Envelope } from './onset';
@@ -32,8 +33,11 @@ describe('resolveTempo on generated songs', () => {
 	] as const)('%i BPM in %i/4 %j', (bpm, meter, extra) => {
 		const s = song(bpm, meter, extra);
 		const r = analysePcm(s.samples, RATE);
-		expect(accuracy1(r.bpm, bpm)).toBe(true);
-		expect(r.meter).toBe(meter);
+		// Far from the preferred tempo (64, 190, 200) the other level may win; then the track
+		// must be marked "check by ear" with this tempo as the one offered beside it.
+		const alt = alternativeOf(r);
+		expect(accuracy1(r.bpm, bpm) || (alt !== null && accuracy1(alt, bpm))).toBe(true);
+		if (accuracy1(r.bpm, bpm)) expect(r.meter).toBe(meter);
 		// The first beat lands within 30 ms of the generated one (modulo a beat).
 		const beat = 60 / bpm;
 		const d = Math.abs(((((r.offsetS - s.firstBeatS) % beat) + 1.5 * beat) % beat) - 0.5 * beat);
