@@ -79,4 +79,11 @@ describe('the beat dancers count', () => {
 	it('a triplet-feel shuffle at 112 BPM', () => {
 		expect(measure(112, 4, shuffle).bpm).toSatisfy((b: number) => accuracy1(b, 112));
 	});
+
+	// The case: music from 0.000 s read one beat late (0.47–0.67 s) before.
+	it('a rock beat whose first beat is at 0.000 s: offset within 30 ms of it', () => {
+		const r = measure(120, 4, rock, 0);
+		expect(r.bpm).toSatisfy((b: number) => accuracy1(b, 120));
+		expect(r.offsetS).toBeLessThan(0.03);
+	});
 });
