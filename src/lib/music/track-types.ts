@@ -36,6 +36,8 @@ export interface TrackJson {
 	createdAt: string;
 	updatedAt: string;
 	version: number;
+	/** The audio file was gone at start-up; re-upload the same file to restore it. */
+	audioMissing: boolean;
 }
 
 export interface TrackPage {

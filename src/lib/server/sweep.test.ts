@@ -11,6 +11,7 @@ let t: ReturnType<typeof makeTestDb>;
 let dir: string;
 let store: Storage;
 const sha = (c: string) => c.repeat(64);
+const now = 1_800_000_000_000;
 
 beforeEach(() => {
 	t = makeTestDb();
@@ -33,7 +34,7 @@ function trackRow(key: string, hash: string) {
 	};
 }
 
-test('removes files without rows, rows without files and half-written files', async () => {
+test('removes files without rows and half-written files; marks, never deletes, rows without files', async () => {
 	await store.put(`audio/${sha('a')}.mp3`, new Uint8Array([1, 2, 3])); // has a row
 	await store.put(`audio/${sha('b')}.mp3`, new Uint8Array([1, 2, 3])); // orphan file
 	writeFileSync(join(dir, 'audio', `${sha('c')}.mp3.123.part`), 'half');
@@ -46,19 +47,23 @@ test('removes files without rows, rows without files and half-written files', as
 		.values(trackRow(`audio/${sha('d')}.mp3`, sha('d')))
 		.run(); // file gone
 
-	const report = await sweepOrphans(store);
+	const report = await sweepOrphans(store, now);
 
 	expect(report.temporaryFiles).toBe(1);
 	expect(report.orphanFiles).toEqual([`audio/${sha('b')}.mp3`]);
 	expect(report.tracksWithoutFile).toHaveLength(1);
 	expect(readdirSync(join(dir, 'audio'))).toEqual([`${sha('a')}.mp3`]);
+	// The row whose file is gone stays, marked; the other is untouched (issue 13, finding 4).
 	expect(
 		t.db
 			.select()
 			.from(tracks)
 			.all()
-			.map((r) => r.sha256)
-	).toEqual([sha('a')]);
+			.map((r) => [r.sha256, r.audioMissingAt])
+	).toEqual([
+		[sha('a'), null],
+		[sha('d'), now]
+	]);
 });
 
 test('a clean store is left alone', async () => {

@@ -2,7 +2,8 @@ import { CredentialsSignin } from '@auth/core/errors';
 import { fail, isRedirect, redirect } from '@sveltejs/kit';
 import { credentialsSchema, signIn } from '../../auth';
 import { publicRoute } from '$lib/server/guard';
-import { clearAccount, isLimited, recordFailure } from '$lib/server/sign-in-limit';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { clearPair, recordFailure, signInGate } from '$lib/server/sign-in-limit';
 import type { Actions, PageServerLoad } from './$types';
 
 const WRONG = 'That e-mail and password do not match an account.';
@@ -35,19 +36,22 @@ export const actions = {
 			return fail(400, { email, message: parsed.error.issues[0]?.message ?? WRONG });
 		}
 		const address = event.getClientAddress();
-		if (isLimited(parsed.data.email, address)) {
+		const gate = signInGate(parsed.data.email, address);
+		if (gate.limited) {
 			return fail(429, {
 				email,
 				message: 'Too many failed sign-ins. Wait fifteen minutes, then try again.'
 			});
 		}
+		// An account under attack from many addresses is slowed for everyone, never shut.
+		if (gate.delayMs) await sleep(gate.delayMs);
 		try {
 			await signIn(event);
 		} catch (e) {
 			// Auth.js answers with a redirect on success; a failure is a CredentialsSignin error
 			// (or, in some versions, a redirect to ?error=).
 			if (isRedirect(e) && !e.location.includes('error=')) {
-				clearAccount(parsed.data.email);
+				clearPair(parsed.data.email, address);
 				redirect(303, safeTarget(String(form.get('redirectTo') ?? '/')));
 			}
 			if (!isRedirect(e) && !(e instanceof CredentialsSignin)) throw e;

@@ -153,6 +153,10 @@ export const tracks = sqliteTable(
 		/** Key of the audio in storage; never built from user input. */
 		storageKey: text('storage_key').notNull(),
 		originalName: text('original_name').notNull().default(''),
+		/** When the start-up sweep found the audio file gone (ms since epoch); null while it is
+		 * there. Such a track keeps its verdicts and run-order places but is not planned or
+		 * exported until the same file is uploaded again. */
+		audioMissingAt: integer('audio_missing_at'),
 		uploadedBy: integer('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
 		createdAt: createdAt(),
 		updatedAt: updatedAt(),

@@ -1,6 +1,6 @@
 // The catalogue as the pure modules see it: dances and tracks as facts, the team's verdicts, and
 // fit scores computed by the fit engine (src/lib/fit/).
-import { eq } from 'drizzle-orm';
+import { eq, isNull } from 'drizzle-orm';
 import type { DanceFacts, Meter, Rhythm, TrackFacts } from '../../domain';
 import { rankFits, type FitItem, type TeamVerdict } from '../../fit';
 import { db } from '../db';
@@ -42,6 +42,9 @@ export interface Catalogue {
 	fitRows: FitRow[];
 }
 
+/** A track the planner may offer: its audio file was there at the last sweep. */
+export const playable = (t: TrackRow) => t.audioMissingAt === null;
+
 export function readCatalogue(): Catalogue {
 	return {
 		dances: db().select().from(dances).all(),
@@ -61,7 +64,7 @@ export function verdictsOfDance(fitRows: readonly FitRow[], danceId: number) {
 export function rankTracksFor(danceId: number, limit = 12): FitItem[] {
 	const dance = db().select().from(dances).where(eq(dances.id, danceId)).get();
 	if (!dance) return [];
-	const trackRows = db().select().from(tracks).all();
+	const trackRows = db().select().from(tracks).where(isNull(tracks.audioMissingAt)).all();
 	const fitRows = db().select().from(fits).where(eq(fits.danceId, danceId)).all();
 	return rankFits(
 		danceFacts(dance),

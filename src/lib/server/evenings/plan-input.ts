@@ -8,7 +8,7 @@ import type { LockedEntry, PlanFit, PlanInput } from '../../planner';
 import { planSettingsInput, type EntryInput } from '../../schemas/evening';
 import { db } from '../db';
 import { requests } from '../db/schema';
-import { danceFacts, readCatalogue, trackFacts, verdictsOfDance } from './catalogue';
+import { danceFacts, playable, readCatalogue, trackFacts, verdictsOfDance } from './catalogue';
 import { EveningError } from './errors';
 import { gapSeconds } from './gap';
 import { loadEvening } from './load';
@@ -26,7 +26,8 @@ interface Draft {
 }
 
 function computedFits(cat: ReturnType<typeof readCatalogue>): PlanFit[] {
-	const facts = cat.tracks.map(trackFacts);
+	// A track whose audio is missing keeps its places but is offered for none.
+	const facts = cat.tracks.filter(playable).map(trackFacts);
 	const lessonRate = new Map(cat.fitRows.map((f) => [`${f.danceId}:${f.trackId}`, f.lessonRate]));
 	const out: PlanFit[] = [];
 	for (const d of cat.dances) {

@@ -6,14 +6,18 @@ import { tracks } from '../db/schema';
 import { loadEvening, type EveningJson } from '../evenings/load';
 import type { RunSheet } from './sheet';
 
-function trackLengths(ids: number[]): Map<number, number> {
+type TrackFile = { durationS: number; missing: boolean };
+
+function trackLengths(ids: number[]): Map<number, TrackFile> {
 	if (ids.length === 0) return new Map();
 	const rows = db()
-		.select({ id: tracks.id, durationS: tracks.durationS })
+		.select({ id: tracks.id, durationS: tracks.durationS, missingAt: tracks.audioMissingAt })
 		.from(tracks)
 		.where(inArray(tracks.id, ids))
 		.all();
-	return new Map(rows.map((r) => [r.id, r.durationS]));
+	return new Map(
+		rows.map((r) => [r.id, { durationS: r.durationS, missing: r.missingAt !== null }])
+	);
 }
 
 export const firstName = (name: string | null) => name?.trim().split(/\s+/)[0] || null;
@@ -33,7 +37,11 @@ function lessonDance(evening: EveningJson, e: EveningJson['entries'][number]): s
 	return section?.kind === 'lesson' ? section.danceName : null;
 }
 
-export function toSheet(evening: EveningJson, origin: string, lengths = new Map<number, number>()) {
+export function toSheet(
+	evening: EveningJson,
+	origin: string,
+	lengths = new Map<number, TrackFile>()
+) {
 	const sheet: RunSheet = {
 		id: evening.id,
 		title: evening.title,
@@ -65,7 +73,8 @@ export function toSheet(evening: EveningJson, origin: string, lengths = new Map<
 			trackId: e.trackId,
 			trackTitle: e.trackTitle,
 			artist: e.trackArtist,
-			trackDurationS: e.trackId === null ? null : (lengths.get(e.trackId) ?? null),
+			trackDurationS: e.trackId === null ? null : (lengths.get(e.trackId)?.durationS ?? null),
+			audioMissing: e.trackId !== null && lengths.get(e.trackId)?.missing === true,
 			bpm: e.trackBpm,
 			rate: e.rate,
 			locked: e.locked,

@@ -12,7 +12,8 @@ export const audioUrl = (origin: string, trackId: number) =>
 export function buildM3u8(sheet: RunSheet, origin: string): string {
 	const lines = ['#EXTM3U', `# ${oneLine(sheet.title)}`];
 	for (const e of sheet.entries) {
-		if (e.kind !== 'dance' || e.trackId === null) continue;
+		// A track whose audio is gone would be a dead line in the player: leave it out.
+		if (e.kind !== 'dance' || e.trackId === null || e.audioMissing) continue;
 		// RFC 8216 §4.3.2.1: whole seconds are the form every version accepts.
 		const seconds = Math.round(e.trackDurationS ?? e.durationS);
 		const name = [e.artist, e.trackTitle].map((s) => oneLine(s ?? '')).filter(Boolean);

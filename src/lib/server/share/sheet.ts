@@ -33,6 +33,8 @@ export interface SheetEntry {
 	artist: string | null;
 	/** The track's own length, as a playlist player plays it (the rate ignored). */
 	trackDurationS: number | null;
+	/** The track's audio file is gone (start-up sweep): no playlist line for it. */
+	audioMissing?: boolean;
 	bpm: number | null;
 	rate: number;
 	locked: boolean;

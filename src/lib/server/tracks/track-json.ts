@@ -31,6 +31,7 @@ export function toTrackJson(row: TrackRow): TrackJson {
 		originalName: row.originalName,
 		createdAt: row.createdAt.toISOString(),
 		updatedAt: row.updatedAt.toISOString(),
-		version: row.version
+		version: row.version,
+		audioMissing: row.audioMissingAt !== null
 	};
 }

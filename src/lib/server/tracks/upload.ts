@@ -14,7 +14,7 @@ import { tracks } from '../db/schema';
 import { storage, type Storage } from '../storage';
 import { cleanText as clean, displayName, titleFromName } from './display-name';
 import { inspectAudio, type AudioFacts } from './inspect-audio';
-import { toTrackJson } from './track-json';
+import { toTrackJson, type TrackRow } from './track-json';
 
 export interface UploadInput {
 	bytes: Uint8Array;
@@ -83,6 +83,46 @@ export function rowValues(facts: AudioFacts, a: Analysis, name: string) {
 
 const bySha = (sha256: string) => db().select().from(tracks).where(eq(tracks.sha256, sha256)).get();
 
+/** The same bytes (same SHA-256) for a track marked "audio missing": put the file back and
+ * unmark it, keeping the row with its verdicts and run-order places. */
+async function restoreAudio(
+	row: TrackRow,
+	bytes: Uint8Array,
+	store: Storage
+): Promise<UploadResult> {
+	const stored = await storeOrRefuse(store, row.storageKey, bytes);
+	if (stored) return stored;
+	const back = db()
+		.update(tracks)
+		.set({ audioMissingAt: null })
+		.where(eq(tracks.id, row.id))
+		.returning()
+		.get()!;
+	return { ok: true, status: 200, duplicate: true, track: toTrackJson(back) };
+}
+
+/** Writes the file; a full disk or an unwritable folder is a plain 507, nothing stored. */
+async function storeOrRefuse(
+	store: Storage,
+	key: string,
+	bytes: Uint8Array
+): Promise<Refusal | null> {
+	try {
+		await store.put(key, bytes);
+		return null;
+	} catch (e) {
+		const code = (e as NodeJS.ErrnoException).code ?? '';
+		if (!['ENOSPC', 'EACCES', 'EPERM', 'EROFS', 'EDQUOT', 'ENOENT'].includes(code)) throw e;
+		console.error(`Upload could not be stored (${code}):`, (e as Error).message);
+		return {
+			ok: false,
+			status: 507,
+			error:
+				'The server could not store the file: its disk is full or the upload folder is not writable. Nothing was saved; tell whoever runs Floorset.'
+		};
+	}
+}
+
 export async function uploadTrack(
 	input: UploadInput,
 	store: Storage = storage()
@@ -96,24 +136,13 @@ export async function uploadTrack(
 
 	const sha256 = createHash('sha256').update(input.bytes).digest('hex');
 	const existing = bySha(sha256);
+	if (existing?.audioMissingAt != null) return restoreAudio(existing, input.bytes, store);
 	if (existing) return { ok: true, status: 200, duplicate: true, track: toTrackJson(existing) };
 
 	const name = displayName(input.fileName);
 	const storageKey = `audio/${sha256}.${facts.ext}`;
-	try {
-		await store.put(storageKey, input.bytes);
-	} catch (e) {
-		// A full disk or an unwritable upload folder: say so plainly; nothing was stored.
-		const code = (e as NodeJS.ErrnoException).code ?? '';
-		if (!['ENOSPC', 'EACCES', 'EPERM', 'EROFS', 'EDQUOT', 'ENOENT'].includes(code)) throw e;
-		console.error(`Upload could not be stored (${code}):`, (e as Error).message);
-		return {
-			ok: false,
-			status: 507,
-			error:
-				'The server could not store the file: its disk is full or the upload folder is not writable. Nothing was saved; tell whoever runs Floorset.'
-		};
-	}
+	const refused = await storeOrRefuse(store, storageKey, input.bytes);
+	if (refused) return refused;
 	try {
 		const row = db()
 			.insert(tracks)
