@@ -16,6 +16,7 @@ export interface AnalysisLine {
 	rawBpm?: number;
 	offsetS?: number;
 	confidence?: number;
+	alternative?: number | null;
 	meter?: number;
 	durationS?: number;
 	title?: string | null;
@@ -123,6 +124,7 @@ export class Analyser {
 				rawBpm: number;
 				offsetS: number;
 				confidence: number;
+				alternative: number | null;
 				candidates: { bpm: number; score: number }[];
 			};
 		};
@@ -133,6 +135,7 @@ export class Analyser {
 			rawBpm: tempo.rawBpm,
 			offsetS: tempo.offsetS,
 			confidence: tempo.confidence,
+			alternative: tempo.alternative,
 			meter: r.meter,
 			durationS: tags.durationS,
 			title: tags.title,

@@ -18,6 +18,8 @@ export const analysisSchema = z.object({
 	rawBpm: bpm.nullable().optional(),
 	offsetS: z.number().min(0).max(3600).default(0),
 	confidence: z.number().min(0).max(1).nullable().optional(),
+	/** The other reading when the two levels were nearly as strong ("check by ear"). */
+	alternative: bpm.nullable().optional(),
 	source: z.enum(TEMPO_SOURCES).default('detected'),
 	meter: meter.default(4),
 	candidates: z
@@ -40,6 +42,8 @@ export const patchSchema = z
 		artist: text(300).optional(),
 		album: text(300).optional(),
 		bpm: bpm.nullable().optional(),
+		/** null: the DJ has chosen between the two readings. */
+		altBpm: bpm.nullable().optional(),
 		bpmSource: z.enum(TEMPO_SOURCES).optional(),
 		offsetS: z.number().min(0).max(3600).optional(),
 		meter: meter.optional(),
@@ -96,6 +100,8 @@ export const listQuerySchema = z.object({
 	verdict: z
 		.enum(VERDICT_FILTERS, { message: `Verdict is one of: ${VERDICT_FILTERS.join(', ')}.` })
 		.optional(),
+	/** "1": only tracks whose tempo awaits a check by ear. */
+	checkByEar: z.enum(['1'], { message: 'checkByEar is 1 or left out.' }).optional(),
 	sort: z.enum(SORTS, { message: `Sort by one of: ${SORTS.join(', ')}.` }).default('title'),
 	limit: z.coerce
 		.number({ message: 'The limit is a number of tracks.' })

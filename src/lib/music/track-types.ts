@@ -20,6 +20,8 @@ export interface TrackJson {
 	bpmSource: TempoSource;
 	offsetS: number;
 	confidence: number | null;
+	/** The other metrical level's tempo while the DJ has still to check by ear; else null. */
+	altBpm: number | null;
 	candidates: TempoCandidateJson[];
 	meter: Meter;
 	phraseBeats: number;

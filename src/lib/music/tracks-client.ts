@@ -45,6 +45,7 @@ export type TrackChanges = Partial<
 		| 'artist'
 		| 'album'
 		| 'bpm'
+		| 'altBpm'
 		| 'bpmSource'
 		| 'offsetS'
 		| 'meter'

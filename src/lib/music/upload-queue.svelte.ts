@@ -199,6 +199,8 @@ export function analysisBody(a: FileAnalysis) {
 		rawBpm: a.tempo.rawBpm,
 		offsetS: a.tempo.offsetS,
 		confidence: a.tempo.confidence,
+		// A BPM tag that agrees settles which level it is.
+		alternative: tag === null ? a.tempo.alternative : null,
 		source: tag === null ? a.tempo.source : ('tag' as const),
 		meter: a.meter,
 		candidates: a.tempo.candidates.slice(0, 16),

@@ -17,6 +17,7 @@ const analysis = (bpm: number): FileAnalysis => ({
 		rawBpm: bpm,
 		offsetS: 0.1,
 		confidence: 0.9,
+		alternative: null,
 		candidates: [{ bpm, score: 1 }],
 		source: 'detected',
 		tagAgrees: false

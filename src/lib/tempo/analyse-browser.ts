@@ -7,8 +7,9 @@
 import { parseBlob, type IAudioMetadata } from 'music-metadata';
 import { guess } from 'web-audio-beat-detector';
 import type { Meter, Rhythm } from '../domain';
+import { alternativeOf } from './alternative';
 import { id3v2Size, mp3Head, wavExcerpt } from './excerpt';
-import { analysePcm, type TempoCandidate } from './resolve';
+import { analysePcm, firstBeatS, type TempoCandidate } from './resolve';
 
 export interface AnalyseOptions {
 	/**
@@ -45,6 +46,8 @@ export interface FileAnalysis {
 		rawBpm: number;
 		offsetS: number;
 		confidence: number;
+		/** The other metrical level when it is nearly as strong: the DJ should check by ear. */
+		alternative: number | null;
 		candidates: TempoCandidate[];
 		source: 'detected';
 		/** The file's BPM tag is within 4 % of the measured tempo (so the tag can be shown as
@@ -98,8 +101,9 @@ export async function analyseFile(file: Blob, o: AnalyseOptions = {}): Promise<F
 		tempo: {
 			bpm: r.bpm,
 			rawBpm: r.rawBpm,
-			offsetS: round3((((startS + r.offsetS) % beatS) + beatS) % beatS),
+			offsetS: round3(firstBeatS(startS + r.offsetS, beatS)),
 			confidence: r.confidence,
+			alternative: alternativeOf(r),
 			candidates: r.candidates,
 			source: 'detected',
 			tagAgrees: tags.tagBpm !== null && Math.abs(r.bpm / tags.tagBpm - 1) <= 0.04

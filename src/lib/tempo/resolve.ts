@@ -45,6 +45,8 @@ export interface ResolveOptions {
 const RATIOS = [1, 2, 0.5, 3, 1 / 3, 1.5, 2 / 3];
 /** Tempi within this ratio are the same tempo (Gouyon et al. 2006 use 4 % for accuracy). */
 const SAME = 0.02;
+/** A first beat this close before the excerpt's start is the beat at its start. */
+const START_SLACK_S = 0.03;
 
 export function analysePcm(pcm: Float32Array, sampleRate: number, o: ResolveOptions = {}) {
 	return resolveTempo(onsetEnvelope(pcm, sampleRate), o);
@@ -88,11 +90,17 @@ export function resolveTempo(env: Envelope, o: ResolveOptions = {}): TempoResult
 	return {
 		bpm: round2(best.bpm),
 		rawBpm: round2(rawBpm),
-		offsetS: Math.max(0, offsetS % (60 / best.bpm)),
+		offsetS: firstBeatS(offsetS, 60 / best.bpm),
 		confidence: confidenceOf(best, scored),
 		meter,
 		candidates: scored.map((s) => ({ bpm: round2(s.bpm), score: round3(s.score) }))
 	};
+}
+
+/** The first grid position at or after the start, where one just before it counts as at it. */
+export function firstBeatS(anyBeatS: number, beatS: number): number {
+	const t = ((anyBeatS % beatS) + beatS) % beatS;
+	return t > beatS - START_SLACK_S ? 0 : t;
 }
 
 const near = (a: number, b: number) => Math.abs(a / b - 1) < SAME;

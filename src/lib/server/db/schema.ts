@@ -134,6 +134,9 @@ export const tracks = sqliteTable(
 			.default('detected'),
 		offsetS: real('offset_s').notNull().default(0),
 		confidence: real('confidence'),
+		/** The other metrical level's tempo when the measurement could not tell the two apart
+		 * ("check by ear"); null when it could, or once the DJ has chosen. */
+		altBpm: real('alt_bpm'),
 		/** Other tempo readings the DJ may flip to (JSON [{bpm, score}]). */
 		candidates: text('candidates', { mode: 'json' })
 			.$type<{ bpm: number; score: number }[]>()

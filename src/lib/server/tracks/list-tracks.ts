@@ -1,6 +1,6 @@
 // GET /api/tracks: search, filters, sort and keyset pages. Keyset (not offset) paging so a page
 // deep in 10,000 tracks costs the same as the first and rows added meanwhile do not shift pages.
-import { and, eq, getTableColumns, gte, lte, sql, type SQL } from 'drizzle-orm';
+import { and, eq, getTableColumns, gte, isNotNull, lte, sql, type SQL } from 'drizzle-orm';
 import type { TrackListQuery, TrackSort } from '../../music/track-schemas';
 import type { TrackPage } from '../../music/track-types';
 import { db } from '../db';
@@ -37,6 +37,7 @@ function filters(q: TrackListQuery): SQL[] {
 	if (q.bpmMin !== undefined) where.push(gte(tracks.bpm, q.bpmMin));
 	if (q.bpmMax !== undefined) where.push(lte(tracks.bpm, q.bpmMax));
 	if (q.meter !== undefined) where.push(eq(tracks.meter, q.meter));
+	if (q.checkByEar) where.push(isNotNull(tracks.altBpm));
 	const forDance = q.dance === undefined ? sql`` : sql` AND ${fits.danceId} = ${q.dance}`;
 	if (q.verdict === 'unjudged') {
 		where.push(

@@ -18,6 +18,7 @@ export function toTrackJson(row: TrackRow): TrackJson {
 		bpmSource: row.bpmSource,
 		offsetS: row.offsetS,
 		confidence: row.confidence,
+		altBpm: row.altBpm,
 		candidates: row.candidates,
 		meter: row.meter as Meter,
 		phraseBeats: row.phraseBeats,

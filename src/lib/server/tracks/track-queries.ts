@@ -29,6 +29,8 @@ export function updateTrack(id: number, patch: TrackPatch): UpdateResult {
 	const values: Partial<TrackRow> = { ...changes };
 	// A tempo typed without saying where it came from was entered by hand.
 	if (changes.bpm !== undefined && changes.bpmSource === undefined) values.bpmSource = 'entered';
+	// A tempo the DJ sets settles a pending check by ear.
+	if (changes.bpm !== undefined && changes.altBpm === undefined) values.altBpm = null;
 	// Changing the meter moves a phrase still at the old default to the new default.
 	if (
 		changes.meter !== undefined &&

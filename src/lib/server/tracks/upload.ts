@@ -71,6 +71,7 @@ export function rowValues(facts: AudioFacts, a: Analysis, name: string) {
 		bpmSource,
 		offsetS: Math.min(a.offsetS, facts.durationS),
 		confidence: measured === null ? null : (a.confidence ?? null),
+		altBpm: measured === null ? null : (a.alternative ?? null),
 		candidates: a.candidates,
 		meter: a.meter,
 		phraseBeats: defaultPhraseBeats(a.meter),

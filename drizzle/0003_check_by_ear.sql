@@ -1,0 +1,1 @@
+ALTER TABLE `tracks` ADD `alt_bpm` real;
