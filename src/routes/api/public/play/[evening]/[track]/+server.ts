@@ -1,6 +1,7 @@
 // A signed play link (see $lib/server/share/play-link): no session, so a playlist plays on
 // the laptop at the venue. Refused when the tag does not fit (403), once expired (410 Gone:
-// the link was good and is no more), and once the evening or the track in it is gone (404).
+// the link was good and is no more), and once the evening or the track in it is gone (410 too:
+// the tag proves the track was in that evening when the link was made).
 import { z } from 'zod';
 import { publicRoute } from '$lib/server/guard';
 import { badRequest } from '$lib/server/json-body';
@@ -17,7 +18,10 @@ const id = z
 const linkSchema = z.object({
 	evening: id,
 	track: id,
-	expires: z.string().regex(/^\d{1,12}$/).transform(Number),
+	expires: z
+		.string()
+		.regex(/^\d{1,12}$/)
+		.transform(Number),
 	sig: z.string().min(1).max(100)
 });
 
@@ -38,7 +42,7 @@ export const GET = (async (event) => {
 		return badRequest('This play link has expired. Download the playlist again.', 410);
 	}
 	const row = playableTrack(evening, track);
-	if (!row) return badRequest('This track is no longer in that evening.', 404);
+	if (!row) return badRequest('This evening or this track in it is gone.', 410);
 	// no-store: a copy kept by the player must not outlive the link's refusal.
 	return audioResponse(row, event.request, 'private, no-store');
 }) satisfies RequestHandler;
