@@ -42,7 +42,10 @@ export const plannerSettings = z
 	.object({
 		fitThreshold: z.number().min(0).max(1),
 		repeatWindowMin: z.number().min(0).max(600),
-		breakEveryMin: z.number().min(10).max(600),
+		// 0: off, rests only where the sections put them (the default).
+		breakEveryMin: z.union([z.literal(0), z.number().min(10).max(600)]),
+		minRepetitions: z.number().min(0).max(20),
+		minTrackS: z.number().min(0).max(1800),
 		breakLengthMin: z.number().min(0).max(60),
 		maxConsecutiveFast: z.number().int().min(1).max(20),
 		fastBpm: z.number().min(40).max(300),
