@@ -192,6 +192,15 @@ export const eveningForm = z.object({
 		)
 		.max(40),
 	mustPlay: z.array(z.coerce.number().int().positive()).max(200),
-	neverPlay: z.array(z.coerce.number().int().positive()).max(2000)
+	neverPlay: z.array(z.coerce.number().int().positive()).max(2000),
+	// Empty is off; otherwise whole minutes, as the planner's breakEveryMin accepts.
+	restEveryMin: z.union([
+		z.literal(''),
+		z.coerce
+			.number({ message: 'Give the minutes of dancing between rests as a number.' })
+			.int('Give whole minutes of dancing between rests.')
+			.min(10, 'A rest after every 10 minutes of dancing at the least.')
+			.max(600, 'A rest after every 600 minutes of dancing at the most.')
+	])
 });
 export type EveningFormInput = z.infer<typeof eveningForm>;
