@@ -326,7 +326,14 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await dance.getByRole('button', { name: /^Swap track/ }).click();
 	const offers = page.getByRole('button', { name: /^Use / });
 	await expect(offers.first()).toBeVisible();
-	const choice = (await offers.first().textContent())!.replace(/^Use /, '');
+	// Songs already in tonight's order come last, each marked with the entry that plays it.
+	const anyway = page.getByRole('button', { name: /^Use anyway / });
+	await expect(page.getByText(/^already played tonight \(entry \d+\)$/)).toHaveCount(
+		await anyway.count()
+	);
+	const plain = await page.getByRole('button', { name: /^Use (?!anyway )/ }).count();
+	if (plain > 0) await expect(offers.first()).not.toHaveText(/^Use anyway /);
+	const choice = (await offers.first().textContent())!.replace(/^Use (anyway )?/, '');
 	await offers.first().click();
 	await expect(dance.locator('p').nth(1)).not.toHaveText(before!);
 	await expect(dance.locator('p').nth(1)).toContainText(choice);

@@ -180,6 +180,14 @@ export const MATRIX: MatrixRow[] = [
 		allowed: 'everyone signed in',
 		public: true
 	},
+	// Signed play links (issue 12): no session; a link without its tag is refused with 400.
+	{
+		method: 'GET',
+		route: '/api/public/play/[evening]/[track]',
+		path: '/api/public/play/1/1',
+		allowed: 'everyone signed in',
+		public: true
+	},
 	{ method: 'GET', route: '/api/me', path: '/api/me', allowed: 'everyone signed in' },
 	{ method: 'GET', route: '/api/people', path: '/api/people', allowed: ['admin'] },
 	{

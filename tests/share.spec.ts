@@ -1,6 +1,7 @@
 // Getting the evening to people, end to end in Chromium: exports, publishing and the old link's
 // 404, the public page signed out (QR, nothing private), a dancer's request reaching the team,
 // and the run order e-mailed with its two attachments into the captured outbox.
+import { createHmac, hkdfSync } from 'node:crypto';
 import { expect, request as newRequest, test, type APIRequestContext } from '@playwright/test';
 import ICAL from 'ical.js';
 import jsQR from 'jsqr';
@@ -76,6 +77,73 @@ test.afterAll(async () => {
 	await anon.dispose();
 });
 
+/** Signs a play link here, independently of the app: RFC 5869 HKDF-SHA256 for the key from
+ * the test server's AUTH_SECRET (scripts/e2e-server.ts), RFC 2104 HMAC-SHA256 for the tag. */
+function signHere(evening: number, track: number, expires: number): string {
+	const label = 'floorset play link v1';
+	const secret = 'e2e-only-secret-not-for-production-0123456789';
+	const key = Buffer.from(hkdfSync('sha256', secret, '', label, 32));
+	const tag = createHmac('sha256', key)
+		.update(`${label}\n${evening}\n${track}\n${expires}`)
+		.digest('base64url');
+	return `/api/public/play/${evening}/${track}?expires=${expires}&sig=${tag}`;
+}
+
+test('signed play links play with no session and are refused once bent, expired or deleted', async () => {
+	const m3u = await (await organiser.get(`/api/evenings/${own}/export.m3u8`)).text();
+	const uris = m3u.split('\n').filter((l) => l.startsWith('http'));
+	expect(uris.length).toBeGreaterThan(3);
+	const first = new URL(uris[0]);
+	// About 24 h ahead, the default (PLAY_LINK_HOURS); a minute of slack either side.
+	const expires = Number(first.searchParams.get('expires'));
+	expect(Math.abs(expires - (Date.now() / 1000 + 24 * 3600))).toBeLessThan(60);
+
+	// A plain HTTP client with no cookies at all, as a media player on the venue laptop is.
+	const player = await newRequest.newContext();
+	const played = await player.get(uris[0]);
+	expect(played.status(), await played.text()).toBe(200);
+	expect(played.headers()['content-type']).toMatch(/^audio\//);
+	expect((await played.body()).length).toBeGreaterThan(1000);
+	// RFC 9110 §14: a player seeking asks for a byte range and gets 206.
+	const ranged = await player.get(uris[1], { headers: { range: 'bytes=0-99' } });
+	expect(ranged.status()).toBe(206);
+	expect((await ranged.body()).length).toBe(100);
+
+	const sig = first.searchParams.get('sig')!;
+	const bent = new URL(first);
+	bent.searchParams.set('sig', (sig[0] === 'A' ? 'B' : 'A') + sig.slice(1));
+	const forged = await player.get(bent.href);
+	expect(forged.status()).toBe(403);
+	expect((await forged.json()).error).toBeTruthy();
+	const later = new URL(first);
+	later.searchParams.set('expires', String(expires + 3600));
+	expect((await player.get(later.href)).status()).toBe(403);
+
+	// Our own correct tag, over an expiry an hour ago: the app must say Gone, not play.
+	const track = Number(first.pathname.split('/').at(-1));
+	const past = Math.floor(Date.now() / 1000) - 3600;
+	const expired = await player.get(`${BASE}${signHere(own, track, past)}`);
+	expect(expired.status()).toBe(410);
+	expect((await expired.json()).error).toMatch(/expired/);
+	// The same signing, with an expiry ahead, plays: so the 410 above was the expiry alone.
+	const fresh = await player.get(`${BASE}${signHere(own, track, past + 7200)}`);
+	expect(fresh.status()).toBe(200);
+
+	// A deleted evening takes its links with it.
+	const other = await makeOwnEvening(organiser);
+	const otherUri = (await (await organiser.get(`/api/evenings/${other}/export.m3u8`)).text())
+		.split('\n')
+		.find((l) => l.startsWith('http'))!;
+	expect((await player.get(otherUri, { headers: { range: 'bytes=0-9' } })).status()).toBe(206);
+	expect((await organiser.delete(`/api/evenings/${other}`, { headers })).status()).toBeLessThan(
+		300
+	);
+	const gone = await player.get(otherUri);
+	expect(gone.status()).toBe(410);
+	expect((await gone.json()).error).toBeTruthy();
+	await player.dispose();
+});
+
 test('a dancer may export a published evening but not a draft', async () => {
 	const dancer = await newRequest.newContext({ baseURL: BASE });
 	await signInApi(dancer, 'dancer');
@@ -114,9 +182,10 @@ test('exports download as attachments and read back with independent parsers', a
 	expect(lines[0]).toBe('#EXTM3U');
 	const dances = entries.filter((e) => e.kind === 'dance' && e.trackId);
 	expect(lines.filter((l) => /^#EXTINF:\d+,/.test(l))).toHaveLength(dances.length);
-	expect(lines).toContain(`${BASE}/api/tracks/${dances[0].trackId}/audio`);
-	const audio = await organiser.get(`/api/tracks/${dances[0].trackId}/audio`);
-	expect(audio.status()).toBe(200);
+	// The team gets signed play links, one per dance, each on the line after its #EXTINF.
+	const uris = lines.filter((l) => l.startsWith('http'));
+	expect(uris).toHaveLength(dances.length);
+	expect(uris[0]).toContain(`${BASE}/api/public/play/${own}/${dances[0].trackId}?`);
 
 	// ical.js reading RFC 5545: the summary, the UTC start and the public page's URL.
 	const ics = await (await organiser.get(`/api/evenings/${own}/export.ics`)).text();

@@ -6,6 +6,7 @@
 import { stretchItem } from './items';
 import { sizeStretch } from './layout';
 import type { Item, Plan, Problem, Slot } from './model';
+import { restLimitS } from './settings';
 
 /** The trailing break of a slot, if the planner put one there. */
 export function trailingBreak(slot: Slot): Item | null {
@@ -41,7 +42,9 @@ const SCRAP_S = 240;
 
 export function planBreaks(problem: Problem, plan: Plan): Plan {
 	const s = problem.settings;
-	const limit = s.breakEveryMin * 60;
+	const limit = restLimitS(s);
+	// Off: the evening's own sections hold every rest.
+	if (limit === Infinity) return plan;
 	const len = s.breakLengthMin * 60;
 	const tol = s.endToleranceS;
 	const gap = s.gapS;

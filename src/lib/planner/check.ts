@@ -2,7 +2,7 @@
 // and entries alone. It shares no code with the search, so the tests use it as an independent
 // judge, and the editor can use it to warn about a hand-made change.
 import { fitIsPlayable } from './prepare';
-import { resolveSettings } from './settings';
+import { resolveSettings, restLimitS, restSettingWords } from './settings';
 import { eveningLengthS } from './time';
 import type { Id, PlanEntry, PlanInput } from './types';
 
@@ -64,8 +64,8 @@ export function checkRunOrder(input: PlanInput, entries: PlanEntry[]): RunOrderP
 		}
 		if (e.kind === 'dance' || e.kind === 'walkthrough') {
 			dancing += e.durationS;
-			if (dancing > s.breakEveryMin * 60 + EPS)
-				add('break', i, `No break for over ${s.breakEveryMin} minutes at entry ${i + 1}.`);
+			if (dancing > restLimitS(s) + EPS)
+				add('break', i, `Entry ${i + 1} runs past ${restSettingWords(s)}.`);
 		}
 		if (e.kind !== 'dance' || e.danceId === null) return;
 		const dance = dances.get(e.danceId);

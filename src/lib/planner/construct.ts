@@ -16,6 +16,7 @@ import {
 	restWalk,
 	type Walk
 } from './costs';
+import { restLimitS } from './settings';
 import { buildSlots } from './slots';
 import type { LockedEntry } from './types';
 
@@ -154,7 +155,7 @@ export function bestPick(
 	durs: Float64Array
 ): Pick | null {
 	const s = problem.settings;
-	const limit = s.breakEveryMin * 60 - st.w.dancing;
+	const limit = restLimitS(s) - st.w.dancing;
 	const lastDance = problem.sections[slot.section]?.kind === 'last-dance';
 	const mid = (slot.lo + slot.hi) / 2;
 	const half = Math.max(1, (slot.hi - slot.lo) / 2);

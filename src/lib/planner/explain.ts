@@ -4,6 +4,7 @@ import { LEVEL_LABELS, LEVELS } from '../domain';
 import { place, type Placed } from './layout';
 import type { Plan, Problem } from './model';
 import { firstDanceStart, isAfterLesson, isEarly } from './costs';
+import { restSettingWords } from './settings';
 import { minutesWords } from './time';
 import type { PlanEntry } from './types';
 
@@ -114,7 +115,7 @@ export function toEntries(problem: Problem, plan: Plan): PlanEntry[] {
 		} else if (item.kind === 'break') {
 			reasons.push(
 				item.inserted
-					? `break after ${minutesWords(dancing)} of dancing`
+					? `rest after ${minutesWords(dancing)} of dancing, as ${restSettingWords(s)} asks`
 					: section?.kind === 'break'
 						? 'the break in the evening’s sections'
 						: 'break'

@@ -26,6 +26,8 @@ export interface DanceInfo {
 	wellKnown: boolean;
 	bpmMin: number;
 	bpmMax: number;
+	/** Counts in one repetition of the dance. */
+	counts: number;
 	/** Playable pairings, best score first. */
 	cands: Cand[];
 	/** Pairings at full tempo (rate ≈ 1), for the reprise after a lesson. */

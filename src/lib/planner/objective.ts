@@ -13,6 +13,7 @@ import {
 } from './costs';
 import { sizeStretch as sizeStretchImport } from './layout';
 import type { Cand, Plan, Problem } from './model';
+import { restLimitS } from './settings';
 import type { ObjectiveTerms } from './types';
 
 // Local bindings: module namespace getters are measurably slow in the search's inner loop.
@@ -145,7 +146,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 	const terms = reuse ? resetTerms(sc.terms) : zeroTerms();
 	let hardCount = 0;
 	const window = s.repeatWindowMin * 60;
-	const breakLimit = s.breakEveryMin * 60;
+	const breakLimit = restLimitS(s);
 	const restGap = s.breakLengthMin * 60;
 	const w = resetWalk(sc.walk);
 	const hist = sc.hist;

@@ -34,7 +34,8 @@ function shapeArb(generous: boolean): fc.Arbitrary<Shape> {
 			repeatWindowMin: generous
 				? fc.integer({ min: 20, max: 60 })
 				: fc.integer({ min: 10, max: 90 }),
-			breakEveryMin: fc.integer({ min: 25, max: 60 }),
+			// 0 is the default: no rests beyond the evening's sections.
+			breakEveryMin: fc.oneof(fc.constant(0), fc.integer({ min: 25, max: 60 })),
 			breakLengthMin: fc.integer({ min: 5, max: 15 }),
 			maxConsecutiveFast: fc.integer({ min: 1, max: 3 }),
 			gapS: fc.integer({ min: 0, max: 30 }),

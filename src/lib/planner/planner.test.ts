@@ -101,7 +101,8 @@ describe('worked examples of the timing (plain arithmetic)', () => {
 
 describe('the planner on an invented four-hour evening', () => {
 	const input = inventEvening({ seed: 42, dances: 120, tracks: 700, minutes: 240 });
-	const settings = { iterations: 3000, timeBudgetMs: 1e9 };
+	// This evening's form asks for a rest after every 45 minutes of dancing (off by default).
+	const settings = { iterations: 3000, timeBudgetMs: 1e9, breakEveryMin: 45 };
 	const plan = planEvening({ ...input, settings });
 
 	it('keeps every hard rule, checked independently of the search', () => {
@@ -119,11 +120,15 @@ describe('the planner on an invented four-hour evening', () => {
 		});
 	});
 
-	it('inserts breaks into long floors and says why', () => {
+	it('inserts the rests the evening asks for and names the setting', () => {
 		const breaks = plan.entries.filter((e) => e.kind === 'break');
 		expect(breaks.length).toBeGreaterThanOrEqual(2);
 		const added = breaks.filter((b) =>
-			b.reasons.some((r) => /^break after \d+ minutes of dancing$/.test(r))
+			b.reasons.some((r) =>
+				/^rest after \d+ minutes of dancing, as the evening's setting "a rest after every 45 minutes of dancing" asks$/.test(
+					r
+				)
+			)
 		);
 		expect(added.length).toBeGreaterThanOrEqual(1);
 	});

@@ -34,6 +34,33 @@ function makeCand(d: number, t: number, track: TrackInfo, rate: number, fit: Pla
 	};
 }
 
+/**
+ * The count tempo a track is danced at: its tempo at the rate, halved or doubled (half- or
+ * double-time counting) to land nearest the dance's range; the range's middle when the track's
+ * tempo is unknown.
+ */
+function countBpm(dance: Pick<DanceInfo, 'bpmMin' | 'bpmMax'>, eff: number): number {
+	if (!(eff > 0)) return (dance.bpmMin + dance.bpmMax) / 2;
+	const off = (b: number) => Math.max(dance.bpmMin - b, b - dance.bpmMax, 0);
+	return [eff, eff / 2, eff * 2].reduce((best, b) => (off(b) < off(best) ? b : best));
+}
+
+/**
+ * The floor's length rule (issue 12): a pairing is never planned when the music, at its rate, is
+ * shorter than minTrackS or than minRepetitions whole repetitions of the dance (counts × 60 ÷
+ * count tempo each). Exported for the tests and for a swap's list of candidates.
+ */
+export function longEnough(
+	dance: Pick<DanceInfo, 'counts' | 'bpmMin' | 'bpmMax'>,
+	durS: number,
+	eff: number,
+	s: Pick<PlanSettings, 'minTrackS' | 'minRepetitions'>
+): boolean {
+	if (durS < s.minTrackS) return false;
+	if (!(dance.counts > 0)) return true;
+	return durS >= (s.minRepetitions * dance.counts * 60) / countBpm(dance, eff);
+}
+
 const byScore = (a: Cand, b: Cand) => b.score - a.score || a.track - b.track;
 
 function readSections(input: PlanInput, eveningS: number, notes: string[]): SectionInfo[] {
@@ -81,6 +108,7 @@ export function prepare(
 			wellKnown: d.wellKnown === true,
 			bpmMin: d.bpmMin,
 			bpmMax: d.bpmMax,
+			counts: d.counts,
 			cands: [],
 			full: []
 		};
@@ -102,8 +130,9 @@ export function prepare(
 		seen.add(key);
 		const rate = fit.rate && fit.rate > 0 ? fit.rate : 1;
 		if (!(tracks[t].durationS > 0)) continue;
-		playableFits.push({ fit, d, t });
 		const cand = makeCand(d, t, tracks[t], rate, fit);
+		if (!longEnough(dances[d], cand.dur, cand.eff, settings)) continue;
+		playableFits.push({ fit, d, t });
 		dances[d].cands.push(cand);
 		if (Math.abs(rate - 1) <= settings.fullTempoTolerance) dances[d].full.push(cand);
 	}

@@ -4,6 +4,7 @@ import { musicEnd, trailingBreak } from './breaks';
 import { place, slotEnd } from './layout';
 import type { Plan, Problem } from './model';
 import { isLessonTempo } from './prepare';
+import { restLimitS, restSettingWords } from './settings';
 import { minutesWords } from './time';
 
 const EPS = 1e-6;
@@ -32,9 +33,9 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 		}
 		if (item.kind === 'dance' || item.kind === 'walkthrough') {
 			dancing += item.dur;
-			if (dancing > s.breakEveryMin * 60 + EPS) {
+			if (dancing > restLimitS(s) + EPS) {
 				out.push(
-					`Entry ${pos + 1} comes after ${minutesWords(dancing)} of dancing without a break.`
+					`Entry ${pos + 1} comes after ${minutesWords(dancing)} of dancing, past ${restSettingWords(s)}.`
 				);
 			}
 		}

@@ -111,7 +111,12 @@ export interface PlanSettings {
 	/** A computed score at or above this counts as a fit when the team gave no verdict. */
 	fitThreshold: number;
 	repeatWindowMin: number;
+	/** "A rest after every N minutes of dancing"; 0 (the default) is off. */
 	breakEveryMin: number;
+	/** A track shorter than this many repetitions of the dance is never planned for it. */
+	minRepetitions: number;
+	/** Nor is a track (at its planned rate) shorter than this. */
+	minTrackS: number;
 	breakLengthMin: number;
 	maxConsecutiveFast: number;
 	/** Effective tempo (bpm × rate) at or above which an entry counts as fast. */

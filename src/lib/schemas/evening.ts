@@ -42,7 +42,10 @@ export const plannerSettings = z
 	.object({
 		fitThreshold: z.number().min(0).max(1),
 		repeatWindowMin: z.number().min(0).max(600),
-		breakEveryMin: z.number().min(10).max(600),
+		// 0: off, rests only where the sections put them (the default).
+		breakEveryMin: z.union([z.literal(0), z.number().min(10).max(600)]),
+		minRepetitions: z.number().min(0).max(20),
+		minTrackS: z.number().min(0).max(1800),
 		breakLengthMin: z.number().min(0).max(60),
 		maxConsecutiveFast: z.number().int().min(1).max(20),
 		fastBpm: z.number().min(40).max(300),
@@ -189,6 +192,15 @@ export const eveningForm = z.object({
 		)
 		.max(40),
 	mustPlay: z.array(z.coerce.number().int().positive()).max(200),
-	neverPlay: z.array(z.coerce.number().int().positive()).max(2000)
+	neverPlay: z.array(z.coerce.number().int().positive()).max(2000),
+	// Empty is off; otherwise whole minutes, as the planner's breakEveryMin accepts.
+	restEveryMin: z.union([
+		z.literal(''),
+		z.coerce
+			.number({ message: 'Give the minutes of dancing between rests as a number.' })
+			.int('Give whole minutes of dancing between rests.')
+			.min(10, 'A rest after every 10 minutes of dancing at the least.')
+			.max(600, 'A rest after every 600 minutes of dancing at the most.')
+	])
 });
 export type EveningFormInput = z.infer<typeof eveningForm>;

@@ -21,7 +21,9 @@ const schema = z.object({
 		.default('false')
 		.transform((v) => v === 'true'),
 	MAIL_FROM: z.string().default('Floorset <floorset@floorset.test>'),
-	MAX_UPLOAD_MB: z.coerce.number().positive().default(200)
+	MAX_UPLOAD_MB: z.coerce.number().positive().default(200),
+	/** How long a signed play link in an exported playlist works: a night and its set-up. */
+	PLAY_LINK_HOURS: z.coerce.number().positive().max(8760).default(24)
 });
 
 export type Config = z.infer<typeof schema> & { origin: string };

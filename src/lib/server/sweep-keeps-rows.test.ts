@@ -8,7 +8,7 @@ import { evenings, fits, runOrderEntries, tracks } from './db/schema';
 import { rankTracksFor } from './evenings/catalogue';
 import { planInputFor } from './evenings/plan-input';
 import { seedLike } from './evenings/test-fixture';
-import { buildM3u8 } from './share/m3u8';
+import { audioUrl, buildM3u8 } from './share/m3u8';
 import { loadSheet } from './share/load-sheet';
 import { sweepOrphans } from './sweep';
 import { makeTestDb } from './testing/test-db';
@@ -65,7 +65,9 @@ test('a missing file marks its track, keeps its verdicts and places, and keeps i
 	// Out of the playlist (no dead line), still on the run sheet.
 	const sheet = loadSheet(evening.id, origin)!;
 	expect(sheet.entries.map((e) => e.trackId)).toContain(keeper.id);
-	expect(buildM3u8(sheet, origin)).not.toContain(`/api/tracks/${keeper.id}/audio`);
+	expect(buildM3u8(sheet, (e) => audioUrl(origin, e.trackId))).not.toContain(
+		`/api/tracks/${keeper.id}/audio`
+	);
 
 	// A second start-up marks nothing anew and keeps the first date.
 	expect((await sweepOrphans(s.store, now + 1)).tracksWithoutFile).toEqual([]);

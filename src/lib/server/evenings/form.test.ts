@@ -84,4 +84,17 @@ describe('the evening form', () => {
 		// The values come back so the form shows what was typed.
 		expect(bad.values.title).toBe('Midsummer Barn Night');
 	});
+
+	test('"a rest after every N minutes of dancing" is off when empty, kept, and checked', () => {
+		const sections = [['open-floor', 'Open floor', '19:30', '22:00']];
+		const off = readEveningForm(form({ ...base, end: '22:00' }, sections));
+		expect(off.ok && off.input.planSettings?.settings).toEqual({ breakEveryMin: 0 });
+		const on = readEveningForm(form({ ...base, end: '22:00', restEveryMin: '40' }, sections));
+		expect(on.ok && on.input.planSettings?.settings).toEqual({ breakEveryMin: 40 });
+		if (!on.ok) return;
+		const id = createEvening(on.input, null);
+		expect(valuesOf(loadEvening(id)!).restEveryMin).toBe('40');
+		const bad = readEveningForm(form({ ...base, end: '22:00', restEveryMin: '5' }, sections));
+		expect(bad).toMatchObject({ ok: false, message: /10 minutes/ });
+	});
 });

@@ -30,6 +30,8 @@ export interface EveningValues {
 	sections: SectionValues[];
 	mustPlay: number[];
 	neverPlay: number[];
+	/** "A rest after every N minutes of dancing": minutes, or '' for off (the default). */
+	restEveryMin: string;
 }
 
 const DAY_MS = 86_400_000;
@@ -78,7 +80,8 @@ export function readEveningForm(
 		notes: str(form, 'notes'),
 		sections,
 		mustPlay: nums(form, 'mustPlay').map(Number),
-		neverPlay: nums(form, 'neverPlay').map(Number)
+		neverPlay: nums(form, 'neverPlay').map(Number),
+		restEveryMin: str(form, 'restEveryMin').trim()
 	};
 	const parsed = eveningForm.safeParse(values);
 	if (!parsed.success) {
@@ -119,7 +122,9 @@ export function readEveningForm(
 			sections: list,
 			planSettings: {
 				mustPlay: v.mustPlay,
-				neverPlay: { danceIds: v.neverPlay }
+				neverPlay: { danceIds: v.neverPlay },
+				// 0 is the planner's "off": rests only where the sections put them.
+				settings: { breakEveryMin: v.restEveryMin === '' ? 0 : v.restEveryMin }
 			}
 		}
 	};
@@ -129,7 +134,12 @@ export function readEveningForm(
 export function valuesOf(e: EveningJson): EveningValues {
 	const tz = e.timeZone;
 	const wall = (iso: string) => toWall(Date.parse(iso), tz);
-	const ps = e.planSettings as { mustPlay?: unknown[]; neverPlay?: { danceIds?: unknown[] } };
+	const ps = e.planSettings as {
+		mustPlay?: unknown[];
+		neverPlay?: { danceIds?: unknown[] };
+		settings?: { breakEveryMin?: unknown };
+	};
+	const rest = Number(ps.settings?.breakEveryMin ?? 0);
 	return {
 		title: e.title,
 		venue: e.venue,
@@ -150,7 +160,8 @@ export function valuesOf(e: EveningJson): EveningValues {
 		mustPlay: (ps.mustPlay ?? []).map((m) =>
 			typeof m === 'number' ? m : Number((m as { danceId?: number }).danceId)
 		),
-		neverPlay: (ps.neverPlay?.danceIds ?? []).map(Number)
+		neverPlay: (ps.neverPlay?.danceIds ?? []).map(Number),
+		restEveryMin: rest > 0 ? String(rest) : ''
 	};
 }
 
@@ -180,7 +191,8 @@ export function blankValues(): EveningValues {
 			s('last-dance', 'Last dance', '22:50', '23:00')
 		],
 		mustPlay: [],
-		neverPlay: []
+		neverPlay: [],
+		restEveryMin: ''
 	};
 }
 

@@ -1,12 +1,14 @@
 import { describe, expect, test } from 'vitest';
-import { buildM3u8 } from './m3u8';
+import { audioUrl, buildM3u8, type UriOf } from './m3u8';
 import { SHEET } from './test-sheet';
 
 // Line checks against RFC 8216: §4.3.1.1 the first line is #EXTM3U; §4.3.2.1 #EXTINF:<duration>,
 // <title> applies to the URI on the next line (after any comment); §4.1 a line that starts
 // with # but not #EXT is a comment.
+const online: UriOf = (e) => audioUrl('https://floorset.example/', e.trackId);
+
 describe('M3U8 export', () => {
-	const text = buildM3u8(SHEET, 'https://floorset.example/');
+	const text = buildM3u8(SHEET, online);
 	const lines = text.split('\n').filter((l) => l !== '');
 
 	test('starts with #EXTM3U and holds only tags, comments and absolute URIs', () => {
@@ -51,10 +53,20 @@ describe('M3U8 export', () => {
 		expect(lines).toContain('# rate 0.90');
 		const sneaky = buildM3u8(
 			{ ...SHEET, entries: [{ ...SHEET.entries[2], trackTitle: 'A\nhttps://evil.example/x' }] },
-			'https://floorset.example'
+			online
 		);
 		expect(sneaky.split('\n').filter((l) => l.startsWith('https://'))).toEqual([
 			'https://floorset.example/api/tracks/12/audio'
 		]);
+	});
+
+	test('an entry without audio is only a comment: no #EXTINF without its URI', () => {
+		const kit = buildM3u8(SHEET, (e) => (e.trackId === 11 ? null : `02 - ${e.trackTitle}.mp3`));
+		const kitLines = kit.split('\n').filter((l) => l !== '');
+		expect(kitLines.filter((l) => l.startsWith('#EXTINF:'))).toEqual([
+			'#EXTINF:187,Mabel Ashgrove - Tin Roof, Rain'
+		]);
+		expect(kitLines).toContain('# missing audio: The Wrenhill Five - Hayloft Lanterns');
+		expect(kitLines.at(-1)).toBe('02 - Tin Roof, Rain.mp3');
 	});
 });

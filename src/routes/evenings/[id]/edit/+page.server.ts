@@ -29,7 +29,10 @@ export const actions = {
 		const read = readEveningForm(form);
 		if (!read.ok) return fail(400, { values: read.values, message: read.message });
 		const version = Number(form.get('version')) || undefined;
-		const ps = current.planSettings as { neverPlay?: Record<string, unknown> };
+		const ps = current.planSettings as {
+			neverPlay?: Record<string, unknown>;
+			settings?: Record<string, unknown>;
+		};
 		try {
 			updateEvening(id, {
 				...read.input,
@@ -40,6 +43,10 @@ export const actions = {
 					neverPlay: {
 						...ps.neverPlay,
 						danceIds: read.input.planSettings?.neverPlay?.danceIds ?? []
+					},
+					settings: {
+						...ps.settings,
+						breakEveryMin: read.input.planSettings?.settings?.breakEveryMin ?? 0
 					}
 				},
 				version
