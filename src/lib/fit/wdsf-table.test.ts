@@ -5,35 +5,26 @@ import { describe, expect, it } from 'vitest';
 import type { DanceFacts, Meter } from '../domain';
 import { fitTrackToDance } from './fit-score';
 import { rankDancesForTrack } from './rank';
+import { RHYTHM_PRESETS, rhythmsAt } from '../tempo/rhythm-presets';
 import { fitTempo } from './tempo-fit';
 import { dance, track } from './test-helpers';
 
 interface TableRow {
 	name: string;
-	barsMin: number;
-	barsMax: number;
-	beatsPerBar: number;
 	/** Our meter field knows 4/4 and 3/4 only; duple 2/4 (Samba) is stored as 4/4. */
 	meter: Meter;
 	bpmMin: number;
 	bpmMax: number;
 }
 
+// BPM = bars per minute × beats per bar, both columns as REFERENCES.md gives them.
 const TABLE: TableRow[] = [
-	{ name: 'Waltz', barsMin: 28, barsMax: 30, beatsPerBar: 3, meter: 3, bpmMin: 84, bpmMax: 90 },
-	{ name: 'Cha Cha', barsMin: 30, barsMax: 32, beatsPerBar: 4, meter: 4, bpmMin: 120, bpmMax: 128 },
-	{ name: 'Rumba', barsMin: 25, barsMax: 27, beatsPerBar: 4, meter: 4, bpmMin: 100, bpmMax: 108 },
-	{ name: 'Samba', barsMin: 50, barsMax: 52, beatsPerBar: 2, meter: 4, bpmMin: 100, bpmMax: 104 },
-	{ name: 'Jive', barsMin: 42, barsMax: 44, beatsPerBar: 4, meter: 4, bpmMin: 168, bpmMax: 176 },
-	{
-		name: 'Viennese Waltz',
-		barsMin: 58,
-		barsMax: 60,
-		beatsPerBar: 3,
-		meter: 3,
-		bpmMin: 174,
-		bpmMax: 180
-	}
+	{ name: 'Waltz', meter: 3, bpmMin: 84, bpmMax: 90 }, // 28–30 bars × 3
+	{ name: 'Cha Cha', meter: 4, bpmMin: 120, bpmMax: 128 }, // 30–32 bars × 4
+	{ name: 'Rumba', meter: 4, bpmMin: 100, bpmMax: 108 }, // 25–27 bars × 4
+	{ name: 'Samba', meter: 4, bpmMin: 100, bpmMax: 104 }, // 50–52 bars × 2
+	{ name: 'Jive', meter: 4, bpmMin: 168, bpmMax: 176 }, // 42–44 bars × 4
+	{ name: 'Viennese Waltz', meter: 3, bpmMin: 174, bpmMax: 180 } // 58–60 bars × 3
 ];
 
 // Dance records carry the invented catalogue's fields; only meter and range come from the table.
@@ -44,8 +35,8 @@ const dances: DanceFacts[] = TABLE.map((row, i) =>
 		meter: row.meter,
 		counts: row.meter === 3 ? 48 : 32,
 		walls: 1,
-		bpmMin: row.barsMin * row.beatsPerBar,
-		bpmMax: row.barsMax * row.beatsPerBar
+		bpmMin: row.bpmMin,
+		bpmMax: row.bpmMax
 	})
 );
 const byName = (name: string) => dances[TABLE.findIndex((r) => r.name === name)];
@@ -55,8 +46,17 @@ const songFor = (d: DanceFacts, bpm: number, meter: Meter = d.meter) =>
 	track({ bpm, meter, phraseBeats: d.counts, durationS: (8 * d.counts * 60) / bpm });
 
 describe.each(TABLE.map((row, i) => [row.name, row, dances[i]] as const))('%s', (_, row, d) => {
-	it(`converts ${row.barsMin}–${row.barsMax} bars/min × ${row.beatsPerBar} to ${row.bpmMin}–${row.bpmMax} BPM`, () => {
-		expect([d.bpmMin, d.bpmMax]).toEqual([row.bpmMin, row.bpmMax]);
+	it('refuses the dance at rate 1 just outside the range, and at all beyond the ±8 % reach', () => {
+		// 2 % outside the range: the engine no longer takes the track as it is, it changes the rate.
+		expect(fitTrackToDance(songFor(d, row.bpmMax * 1.02), d).tempo?.rate).toBeLessThan(1);
+		expect(fitTrackToDance(songFor(d, row.bpmMin * 0.98), d).tempo?.rate).toBeGreaterThan(1);
+		// Past the reach (needs 0.90× or 1.10×): refused, with the reason said, and scored low.
+		const fast = fitTrackToDance(songFor(d, row.bpmMax / 0.9), d);
+		expect(fast.reasons[0]).toMatch(/^too fast: .*the bound is ±8 %/);
+		expect(fast.score).toBeLessThan(0.2);
+		const slow = fitTrackToDance(songFor(d, row.bpmMin / 1.1), d);
+		expect(slow.reasons[0]).toMatch(/^too slow: .*the bound is ±8 %/);
+		expect(slow.score).toBeLessThan(0.2);
 	});
 	it('accepts the table’s tempos directly, at rate 1', () => {
 		for (const bpm of [row.bpmMin, (row.bpmMin + row.bpmMax) / 2, row.bpmMax]) {
@@ -120,5 +120,38 @@ describe('half and double time against the table', () => {
 			waltz
 		).score;
 		expect(tripleHalf).toBeLessThan(half);
+	});
+});
+
+// The product's rhythm presets (a dance's default range) against the same table. The country
+// waltz and rumba presets are wider than WDSF's, so every WDSF tempo must fall inside them; other
+// bodies differ (REFERENCES.md), so only containment is checked, not equality.
+describe('rhythm presets hold the WDSF tempi', () => {
+	it.each([
+		['Waltz', 'waltz'],
+		['Rumba', 'rumba']
+	] as const)('%s: every WDSF tempo is offered the %s rhythm', (name, rhythm) => {
+		const row = TABLE.find((r) => r.name === name)!;
+		expect(RHYTHM_PRESETS[rhythm].meter).toBe(row.meter);
+		for (let bpm = row.bpmMin; bpm <= row.bpmMax; bpm++) {
+			expect(rhythmsAt(bpm, row.meter)).toContain(rhythm);
+		}
+		// A dance given the preset's range accepts the table's tempi at rate 1.
+		const p = RHYTHM_PRESETS[rhythm];
+		const d = dance({
+			id: 99,
+			name: `Preset ${rhythm}`,
+			meter: p.meter,
+			counts: 32,
+			walls: 1,
+			bpmMin: p.bpmMin,
+			bpmMax: p.bpmMax
+		});
+		for (const bpm of [row.bpmMin, row.bpmMax]) {
+			expect(fitTrackToDance(songFor(d, bpm), d).tempo).toMatchObject({
+				rate: 1,
+				relation: 'direct'
+			});
+		}
 	});
 });

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { SECTION_KINDS, type CrowdMix, type SectionKind } from '../domain';
 import { checkRunOrder, type RunOrderProblem } from './check';
-import { planEvening, plainGreedy } from './index';
+import { planEvening } from './index';
 import { inputFor, locksFrom, type Shape } from './random-evening';
 import type { PlanInput, PlanResult } from './types';
 
@@ -99,7 +99,6 @@ describe('planner properties over random evenings', () => {
 				const same = planEvening(input);
 				expect(same.entries).toEqual(plan.entries);
 				expect(same.objective).toEqual(plan.objective);
-				expect(plan.objective.total).toBeLessThanOrEqual(plainGreedy(input).objective.total + 1e-9);
 				const locked = locksFrom(plan, shape);
 				const replanned = planEvening({ ...input, locked, seed: shape.seed + 7 });
 				assertSound({ ...input, locked }, replanned);

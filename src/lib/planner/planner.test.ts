@@ -157,9 +157,7 @@ describe('the planner on an invented four-hour evening', () => {
 		expect(last.reasons).toContain('last dance: well known and easy');
 	});
 
-	it('is no worse than the plain greedy baseline, and the same for the same seed', () => {
-		const greedy = plainGreedy({ ...input, settings });
-		expect(plan.objective.total).toBeLessThanOrEqual(greedy.objective.total + 1e-9);
+	it('gives the same plan for the same seed', () => {
 		const again = planEvening({ ...input, settings });
 		expect(again.entries).toEqual(plan.entries);
 		expect(again.objective).toEqual(plan.objective);
@@ -361,6 +359,24 @@ describe('thin or odd input', () => {
 		expect(plan.violations).toEqual([]);
 		expect(plan.unmet).toContain(
 			'Section "open-floor" ends after the evening, so it was cut at the evening\'s end.'
+		);
+	});
+});
+
+// "No worse than greedy" could not fail (the annealer starts from the greedy plan and keeps the
+// best it has seen), so the claim is now a margin on a fixed set of invented evenings: the
+// annealed plan's objective must be at least 10 % below the greedy plan's, and check.ts (which
+// shares no code with the search) must find no more hard-rule problems in it. Measured on main:
+// 12–39 % lower on these four evenings, so 10 % leaves room and still fails if the search stalls.
+describe('the search beats the plain greedy construction', () => {
+	const MARGIN = 0.1;
+	it.each([1, 2, 3, 4])('on invented two-hour evening %i, by at least 10 %', (seed) => {
+		const input = inventEvening({ seed, dances: 120, tracks: 600, minutes: 120 });
+		const greedy = plainGreedy(input);
+		const plan = planEvening(input);
+		expect(plan.objective.total).toBeLessThanOrEqual(greedy.objective.total * (1 - MARGIN));
+		expect(checkRunOrder(input, plan.entries).length).toBeLessThanOrEqual(
+			checkRunOrder(input, greedy.entries).length
 		);
 	});
 });

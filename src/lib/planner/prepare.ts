@@ -1,6 +1,7 @@
 // Reads the public input into the working model: indexes, playable pairings, sections in order.
 import { levelRank } from '../domain';
 import { LEVEL_MIX } from './crowd';
+import { playedLengthS } from './time';
 import type {
 	Cand,
 	DanceInfo,
@@ -26,7 +27,7 @@ function makeCand(d: number, t: number, track: TrackInfo, rate: number, fit: Pla
 		dance: d,
 		track: t,
 		rate,
-		dur: track.durationS / rate,
+		dur: playedLengthS(track.durationS, rate),
 		score: Math.max(0, Math.min(1, fit.score)),
 		eff: track.bpm ? track.bpm * rate : 0,
 		marked: fit.verdict === 'fits' || fit.verdict === 'fits-at-rate',
@@ -229,7 +230,7 @@ export function lessonCands(problem: Problem, d: number): Cand[] {
 		return {
 			...c,
 			rate,
-			dur: problem.tracks[c.track].durationS / rate,
+			dur: playedLengthS(problem.tracks[c.track].durationS, rate),
 			eff: c.eff > 0 ? (c.eff / c.rate) * rate : 0
 		};
 	};

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { endOf, eveningLengthS, minutesWords, startTimes } from './time';
+import { endOf, eveningLengthS, minutesWords, playedLengthS, startTimes } from './time';
 
 // Worked examples from plain arithmetic (no outside source needed).
 describe('run-order arithmetic', () => {
@@ -21,7 +21,11 @@ describe('run-order arithmetic', () => {
 	});
 
 	it('a 204 s track at 0.85× lasts 204 ÷ 0.85 = 240 s', () => {
-		expect(204 / 0.85).toBeCloseTo(240, 9);
+		// playedLengthS is what the planner uses for an entry's length (prepare.ts).
+		expect(playedLengthS(204, 0.85)).toBeCloseTo(240, 9);
+		// Faster is shorter: 240 s at 1.2× lasts 200 s; at 1× a track keeps its own length.
+		expect(playedLengthS(240, 1.2)).toBeCloseTo(200, 9);
+		expect(playedLengthS(180, 1)).toBe(180);
 	});
 
 	it('says durations in words', () => {

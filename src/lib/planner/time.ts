@@ -12,6 +12,9 @@ export function eveningLengthS(startsAt: number | string, endsAt: number | strin
 	return Math.max(0, (toEpochMs(endsAt) - toEpochMs(startsAt)) / 1000);
 }
 
+/** How long a track lasts when played at a rate: slowing to 0.85× stretches it by 1 ÷ 0.85. */
+export const playedLengthS = (trackS: number, rate: number): number => trackS / rate;
+
 /** Start times of back-to-back entries with a fixed changeover between them. */
 export function startTimes(startS: number, durations: number[], gapS: number): number[] {
 	const starts: number[] = [];

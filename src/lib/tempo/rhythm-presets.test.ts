@@ -1,30 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { RHYTHMS } from '../domain';
-import { barsPerMinuteToBpm } from './effective';
 import { RHYTHM_PRESETS, rhythmsAt } from './rhythm-presets';
-
-// REFERENCES.md "Dance tempi": WDSF Competition Rules, music rule (secondary: a member
-// federation's extract), bars per minute × beats per bar = BPM.
-const WDSF: [string, number, number, number, number, number][] = [
-	// dance, bars min, bars max, beats per bar, BPM min, BPM max
-	['Waltz', 28, 30, 3, 84, 90],
-	['Tango', 31, 33, 4, 124, 132],
-	['Viennese Waltz', 58, 60, 3, 174, 180],
-	['Slow Foxtrot', 28, 30, 4, 112, 120],
-	['Quickstep', 50, 52, 4, 200, 208],
-	['Samba', 50, 52, 2, 100, 104],
-	['Cha Cha', 30, 32, 4, 120, 128],
-	['Rumba', 25, 27, 4, 100, 108],
-	['Paso Doble', 60, 62, 2, 120, 124],
-	['Jive', 42, 44, 4, 168, 176]
-];
-
-describe('barsPerMinuteToBpm against the WDSF table', () => {
-	it.each(WDSF)('%s', (_dance, barsMin, barsMax, beats, bpmMin, bpmMax) => {
-		expect(barsPerMinuteToBpm(barsMin, beats)).toBe(bpmMin);
-		expect(barsPerMinuteToBpm(barsMax, beats)).toBe(bpmMax);
-	});
-});
 
 describe('rhythm presets', () => {
 	it('has a preset for every rhythm, with min below max', () => {
