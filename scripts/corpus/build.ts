@@ -166,7 +166,7 @@ export function midiTempo(csv: string): MidiTempo | null {
 
 /**
  * The beat a dancer counts and the bar's beats, from the time signature: the quarter note in
- * x/4 and x/2, the dotted quarter in compound time (6/8, 9/8, 12/8). Meter 4 stands for any
+ * x/4 and x/2, the dotted quarter in compound time (3/8, 6/8, 9/8, 12/8). Meter 4 stands for any
  * duple grouping (2/4, 4/4, 6/8, 12/8), 3 for triple (3/4, 9/8); other signatures have no meter
  * to score. (Common practice in dance counting, no source.)
  */
@@ -175,7 +175,7 @@ export function countedBeat(
 	num: number,
 	den: number
 ): { bpm: number; meter: 3 | 4 | null } {
-	if (den === 8 && num % 3 === 0 && num >= 6) {
+	if (den === 8 && num % 3 === 0) {
 		const beats = num / 3;
 		return { bpm: (quarterBpm * 2) / 3, meter: beats === 3 ? 3 : beats % 2 === 0 ? 4 : null };
 	}
