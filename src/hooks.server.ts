@@ -12,6 +12,7 @@ import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
 import { authSecret, config } from '$lib/server/config';
 import { sessionClaim } from '$lib/server/session-token';
+import { isCrossSiteWrite } from '$lib/server/same-origin';
 
 export const init: ServerInit = async () => {
 	if (building) return;
@@ -51,6 +52,16 @@ const session: Handle = async ({ event, resolve }) => {
 	return resolve(event);
 };
 
+/** Writes only from our own pages (or programs that are not browsers), whatever the body. */
+const sameOriginWrites: Handle = ({ event, resolve }) => {
+	const own = [event.url.origin, config().origin.replace(/\/$/, '')];
+	if (isCrossSiteWrite(event.request.method, event.request.headers, own)) {
+		const error = 'Cross-site requests that change data are refused.';
+		return isApi(event) ? json({ error }, { status: 403 }) : new Response(error, { status: 403 });
+	}
+	return resolve(event);
+};
+
 /** A first, coarse gate; each route still checks its own right through the guard helper. */
 const apiNeedsSession: Handle = ({ event, resolve }) => {
 	if (isApi(event) && !event.locals.user && !event.url.pathname.startsWith('/api/public/')) {
@@ -70,6 +81,7 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 
 export const handle = sequence(
 	securityHeaders,
+	sameOriginWrites,
 	onlyOurSignIn,
 	authHandle,
 	session,

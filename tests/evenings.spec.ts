@@ -260,6 +260,14 @@ test('the evenings API: create, read, change and delete, with clear refusals', a
 		headers
 	});
 	expect(stale.status()).toBe(409);
+	// Issue 13, finding 3: a body-less POST from another site, with the organiser's cookie,
+	// must not publish the draft (SvelteKit's own check covers form content types only).
+	const crossSite = await api.post(`/api/evenings/${evening.id}/publish`, {
+		headers: { origin: 'http://evil.example', accept: 'application/json' }
+	});
+	expect(crossSite.status()).toBe(403);
+	expect((await crossSite.json()).error).toMatch(/Cross-site/);
+	expect((await (await api.get(`/api/evenings/${evening.id}`)).json()).status).toBe('draft');
 	expect((await api.delete(`/api/evenings/${evening.id}`, { headers })).status()).toBe(204);
 	expect((await api.get(`/api/evenings/${evening.id}`)).status()).toBe(404);
 	await api.dispose();
