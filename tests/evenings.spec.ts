@@ -352,7 +352,8 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await expect(page.getByText(choice).first()).toBeVisible();
 });
 
-test('the Down and Up buttons each move an entry exactly one place', async ({ page }) => {
+/** The demo evening's run order, open for the organiser, and an entry whose dance is there once. */
+async function openRunOrderAtAUniqueEntry(page: Page) {
 	const api = await newRequest.newContext({ baseURL: BASE });
 	await signInApi(api, 'organiser');
 	await ensureRunOrder(api);
@@ -362,6 +363,11 @@ test('the Down and Up buttons each move an entry exactly one place', async ({ pa
 	await hydrated(page);
 	const names = await entryNames(page);
 	const k = names.findIndex((n, i) => i >= 4 && names.indexOf(n) === names.lastIndexOf(n));
+	return { names, k };
+}
+
+test('the Down and Up buttons each move an entry exactly one place', async ({ page }) => {
+	const { names, k } = await openRunOrderAtAUniqueEntry(page);
 	const rows = page.getByTestId('entry');
 	await rows.nth(k).getByRole('button', { name: /^Down/ }).click();
 	// Down swaps it with the next entry and changes nothing else.
@@ -377,15 +383,7 @@ test('the Down and Up buttons each move an entry exactly one place', async ({ pa
 });
 
 test('the run order can be reordered from the keyboard alone', async ({ page }) => {
-	const api = await newRequest.newContext({ baseURL: BASE });
-	await signInApi(api, 'organiser');
-	await ensureRunOrder(api);
-	await api.dispose();
-	await signIn(page, 'organiser');
-	await page.goto('/evenings/1');
-	await hydrated(page);
-	const names = await entryNames(page);
-	const k = names.findIndex((n, i) => i >= 4 && names.indexOf(n) === names.lastIndexOf(n));
+	const { names, k } = await openRunOrderAtAUniqueEntry(page);
 	// The drag handle takes Space to pick up, arrows to move and Space to put down.
 	const handle = page
 		.getByTestId('entry')
