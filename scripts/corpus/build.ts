@@ -18,7 +18,15 @@
 // tuning half and a test half: every rendering of a piece falls in the same half.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import {
+	existsSync,
+	mkdirSync,
+	readdirSync,
+	readFileSync,
+	rmSync,
+	statSync,
+	writeFileSync
+} from 'node:fs';
 import { basename, dirname, join, relative } from 'node:path';
 import { inflateSync } from 'node:zlib';
 import { corpusDir, type CorpusEntry } from './manifest';
@@ -386,7 +394,11 @@ function recordedPieces(roots: string[]): CorpusEntry[] {
 /** Renders once (cached), then keeps KEEP_S seconds, mono, at RATE, repeated `loops` times. */
 function render(name: string, make: (wav: string) => unknown, loops = 1): boolean {
 	const final = join(AUDIO, name);
-	if (existsSync(final)) return true;
+	if (existsSync(final)) {
+		// A file cut short (a full disk, a killed render) must not pass as cached.
+		if (usable(final)) return true;
+		rmSync(final);
+	}
 	const raw = join(WORK, `raw-${name}`);
 	if (!existsSync(raw)) make(raw);
 	if (!existsSync(raw) || statSync(raw).size < 10_000) return false;
@@ -395,8 +407,14 @@ function render(name: string, make: (wav: string) => unknown, loops = 1): boolea
 	args.push('trim', '0', String(KEEP_S), 'norm', '-1');
 	const r = spawnSync('sox', args, { stdio: 'ignore' });
 	if (r.status !== 0 || !existsSync(final)) return false;
-	// A rendering that is mostly silence (a missing instrument) is no test of anything.
-	const stat = spawnSync('sox', [final, '-n', 'stat'], { encoding: 'utf8' }).stderr;
+	if (usable(final)) return true;
+	rmSync(final);
+	return false;
+}
+
+/** At least 20 s that is not mostly silence (a missing instrument is no test of anything). */
+function usable(wav: string): boolean {
+	const stat = spawnSync('sox', [wav, '-n', 'stat'], { encoding: 'utf8' }).stderr ?? '';
 	const rms = Number(/RMS\s+amplitude:\s+([\d.]+)/.exec(stat)?.[1] ?? 0);
 	const length = Number(/Length \(seconds\):\s+([\d.]+)/.exec(stat)?.[1] ?? 0);
 	return rms > 0.01 && length >= 20;
