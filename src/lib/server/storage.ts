@@ -1,6 +1,7 @@
 // Where uploaded files live. One small interface, so a hosted service could put the bytes in
 // an S3-compatible store instead of the local disk. Keys are made by us (a SHA-256 and a fixed
 // extension), never from a user's file name, so no path is ever built from user input.
+import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { mkdir, open, readdir, rename, rm, stat } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
@@ -35,8 +36,9 @@ export function diskStorage(root: string): Storage {
 		async put(key, bytes) {
 			const target = path(key);
 			await mkdir(join(target, '..'), { recursive: true });
-			const temp = `${target}.${process.pid}.${Date.now()}.part`;
-			const handle = await open(temp, 'w');
+			// Unique per write: two uploads of one file at the same moment must not share a temp file.
+			const temp = `${target}.${randomUUID()}.part`;
+			const handle = await open(temp, 'wx');
 			try {
 				await handle.writeFile(bytes);
 				await handle.sync();

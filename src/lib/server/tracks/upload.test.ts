@@ -68,6 +68,17 @@ describe('a good upload', () => {
 		expect(s.files()).toHaveLength(1);
 	});
 
+	test('the same new file 20 times at once: exactly one 201, the rest duplicates', async () => {
+		// Issue 13, finding 6: temporary names made of pid + millisecond collided into 507s.
+		const { bytes } = wav(110, 3);
+		const all = await Promise.all(Array.from({ length: 20 }, () => upload(bytes)));
+		expect(all.map((r) => r.status).sort()).toEqual([...Array(19).fill(200), 201]);
+		expect(new Set(all.map((r) => (r.ok ? r.track.id : null)))).toEqual(new Set([rows()[0].id]));
+		expect(rows()).toHaveLength(1);
+		// Whole file under its key and no temporary file left behind.
+		expect(s.files()).toHaveLength(1);
+	});
+
 	test('a 3/4 track gets a 24-beat phrase (8 bars)', async () => {
 		const r = await upload(wav(90, 4, 3).bytes, { analysis: analysisJson({ bpm: 90, meter: 3 }) });
 		expect(r.ok && r.track.phraseBeats).toBe(24);
