@@ -60,3 +60,9 @@ test('a session counts only under the password it was issued with', () => {
 	// The stamp gives nothing of the hash away in length or alphabet worth keeping.
 	expect(passwordStamp('x')).toMatch(/^[A-Za-z0-9_-]{22}$/);
 });
+
+test('roles for a person who does not exist: false, and no row written', () => {
+	// Issue 13, finding 8: this used to throw a foreign-key error (a 500 with a stack trace).
+	expect(setRoles(424_242, ['dj'])).toBe(false);
+	expect(sessionUser(424_242)).toBeNull();
+});

@@ -72,10 +72,14 @@ function readSessionUser(userId: number) {
 	return { user: frozen, stamp: passwordStamp(user.passwordHash) };
 }
 
-export function setRoles(userId: number, roles: readonly Role[]) {
-	db().transaction((tx) => {
+/** Replaces a person's roles; false (and nothing changed) when there is no such person. */
+export function setRoles(userId: number, roles: readonly Role[]): boolean {
+	return db().transaction((tx) => {
+		const user = tx.select({ id: users.id }).from(users).where(eq(users.id, userId)).get();
+		if (!user) return false;
 		tx.delete(userRoles).where(eq(userRoles.userId, userId)).run();
 		for (const role of new Set(roles)) tx.insert(userRoles).values({ userId, role }).run();
+		return true;
 	});
 }
 

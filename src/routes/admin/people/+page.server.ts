@@ -43,7 +43,9 @@ export const actions = {
 		if (parsed.data.userId === me.id && !parsed.data.roles.includes('admin')) {
 			return fail(400, { rolesMessage: 'You cannot remove your own admin role.' });
 		}
-		setRoles(parsed.data.userId, parsed.data.roles);
+		if (!setRoles(parsed.data.userId, parsed.data.roles)) {
+			return fail(404, { rolesMessage: 'There is no such person.' });
+		}
 		return { saved: parsed.data.userId };
 	},
 	withdraw: async (event) => {
