@@ -217,6 +217,8 @@ test('a dancer can read dances but not edit them', async ({ page }) => {
 	const view = await page.goto(`/dances/${danceId}`);
 	expect(view?.status()).toBe(200);
 	await expect(page.getByRole('link', { name: 'Edit' })).toHaveCount(0);
+	// The fits are the team's verdicts on the library (issue 13, finding 10): not shown to dancers.
+	await expect(page.getByRole('heading', { name: 'Tracks that fit' })).toHaveCount(0);
 	const edit = await page.goto(`/dances/${danceId}/edit`);
 	expect(edit?.status()).toBe(403);
 	const create = await page.goto('/dances/new');
@@ -237,6 +239,8 @@ test('a dancer can read dances but not edit them', async ({ page }) => {
 	});
 	expect(post.status()).toBe(403);
 	expect((await post.json()).error).toBeTruthy();
+	const fits = await api.get(`/api/dances/${danceId}/fits`);
+	expect(fits.status()).toBe(403);
 	await api.dispose();
 });
 

@@ -30,7 +30,8 @@ export const load = ((event) => {
 	const canReadMusic = holds(me, 'readMusic');
 	return {
 		dance: fits.dance,
-		items: fits.items,
+		// The fits carry the team's verdicts on the library: dancers see the dance, not them.
+		items: canReadMusic ? fits.items : [],
 		level,
 		slowdowns: DEFAULT_LESSON_SETTINGS.slowdownByLevel,
 		lesson: canReadMusic ? lessonMusic(fits, level) : null,

@@ -6,7 +6,8 @@ import { fitsForDance, MAX_FIT_LIMIT, parseLimit } from '$lib/server/fits/rankin
 import type { RequestHandler } from './$types';
 
 export const GET = ((event) => {
-	requireRight(event, 'readDances');
+	// The fits carry the team's verdicts on the whole library: not for dancers.
+	requireRight(event, 'readMusic');
 	const id = idParam(event.params.id);
 	const limit = parseLimit(event.url.searchParams.get('limit'));
 	if (limit == null) return badRequest(`limit is a whole number from 1 to ${MAX_FIT_LIMIT}.`, 422);
