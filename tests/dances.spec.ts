@@ -138,6 +138,10 @@ test('a step sheet must be a PDF by its bytes, and is served as one', async ({ p
 	expect(res.status()).toBe(200);
 	expect(res.headers()['content-type']).toBe('application/pdf');
 	expect(res.headers()['content-disposition']).toContain('Thornbury steps.pdf');
+	// An uploaded PDF never runs as a page of our origin (issue 13, finding 12).
+	expect(res.headers()['content-disposition']).toMatch(/^attachment;/);
+	expect(res.headers()['content-security-policy']).toBe('sandbox');
+	expect(res.headers()['x-content-type-options']).toBe('nosniff');
 	expect((await res.body()).subarray(0, 5).toString()).toBe('%PDF-');
 });
 

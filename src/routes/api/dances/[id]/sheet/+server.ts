@@ -19,7 +19,10 @@ export const GET = (async (event) => {
 		headers: {
 			'content-type': 'application/pdf',
 			'content-length': String(size),
-			'content-disposition': `inline; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`,
+			// An uploaded PDF may carry scripts: never run it as a page of our origin. A download
+			// opens in the reader's own PDF viewer; the sandbox covers any browser that renders it.
+			'content-disposition': `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`,
+			'content-security-policy': 'sandbox',
 			'cache-control': 'private, max-age=300'
 		}
 	});
