@@ -397,13 +397,21 @@ test('the request form is validated, trapped against bots and rate-limited', asy
 	expect(
 		await outcome({ danceName: 'Bot Polka', website: 'http://spam.example', message: 'bot-e2e' })
 	).toMatchObject({ type: 'success' });
-	// Five per ten minutes per address and evening.
+	// Five per ten minutes per device (its cookie) and evening.
 	const results: number[] = [];
 	for (let i = 0; i < 6; i++) {
 		const r = await outcome({ danceName: `Invented Reel ${i}`, message: '' });
 		results.push(r.type === 'success' ? 200 : r.status);
 	}
 	expect(results).toEqual([200, 200, 200, 200, 200, 429]);
+	// Another phone on the same hall Wi-Fi (same address, its own cookie) still gets through.
+	const neighbour = await newRequest.newContext({ baseURL: BASE });
+	const theirs = await neighbour.post(`${shareUrl}?/request`, {
+		form: { danceName: 'Invented Reel from the next table', message: '' },
+		headers: { origin: BASE, accept: 'application/json', 'x-sveltekit-action': 'true' }
+	});
+	expect((await theirs.json()).type).toBe('success');
+	await neighbour.dispose();
 	// The bot's request was never stored; the dancers' were.
 	await signIn(page, 'dj');
 	await page.goto('/requests');

@@ -1,9 +1,10 @@
-import { error, fail } from '@sveltejs/kit';
+import { randomUUID } from 'node:crypto';
+import { error, fail, type RequestEvent } from '@sveltejs/kit';
 import { describeIssue } from '$lib/server/json-body';
 import { publicRoute } from '$lib/server/guard';
 import { publicEvening, requestableDances, storeRequest } from '$lib/server/share/public-evening';
 import { qrDataUrl } from '$lib/server/share/qr';
-import { requestKey, requestLimit } from '$lib/server/share/request-limit';
+import { DEVICE_COOKIE, takeRequest } from '$lib/server/share/request-limit';
 import { publicView } from './public-view';
 import { requestSchema, type RequestValues } from './request-schema';
 import type { Actions, PageServerLoad } from './$types';
@@ -23,6 +24,21 @@ export const load = (async (event) => {
 		dances: requestableDances()
 	};
 }) satisfies PageServerLoad;
+
+/** This browser's random device id, given on its first request (only the action sets it, so
+ * the page itself stays free of cookies). */
+function deviceOf(event: RequestEvent): string {
+	const known = event.cookies.get(DEVICE_COOKIE);
+	if (known && /^[0-9a-f-]{36}$/.test(known)) return known;
+	const made = randomUUID();
+	event.cookies.set(DEVICE_COOKIE, made, {
+		path: '/e',
+		httpOnly: true,
+		sameSite: 'lax',
+		maxAge: 60 * 60 * 24 * 365
+	});
+	return made;
+}
 
 const field = (form: FormData, name: string) => {
 	const v = form.get(name);
@@ -45,7 +61,8 @@ export const actions = {
 		if (!parsed.success) return fail(422, { values, message: describeIssue(parsed.error) });
 		// A filled-in trap field means a bot: thank it and keep nothing.
 		if (parsed.data.website) return { sent: true };
-		if (!requestLimit.take(requestKey(evening.id, event.getClientAddress()))) {
+		const from = { device: deviceOf(event), address: event.getClientAddress() };
+		if (!takeRequest(evening.id, from)) {
 			return fail(429, {
 				values,
 				message: 'Thank you, that is plenty of requests for now. Try again in ten minutes.'
