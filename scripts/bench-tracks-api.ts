@@ -6,7 +6,7 @@ import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { serverArgs } from './env';
+import { applyEnvDefaults, serverArgs } from './env';
 
 const TRACKS = 10_000;
 const RUNS = 60;
@@ -162,13 +162,13 @@ async function overHttp() {
 	db().$client.close();
 	const port = Number(process.env.BENCH_PORT ?? 4299);
 	const origin = `http://127.0.0.1:${port}`;
-	const env = {
+	const env = applyEnvDefaults({
 		...process.env,
 		PORT: String(port),
 		HOST: '127.0.0.1',
 		ORIGIN: origin,
 		AUTH_SECRET: 'bench-only-secret-0123456789abcdef'
-	};
+	});
 	const server = spawn(process.execPath, serverArgs(build), {
 		env,
 		stdio: 'ignore'

@@ -13,9 +13,16 @@ import { sessionUser } from '$lib/server/users';
 import { authSecret, config } from '$lib/server/config';
 import { sessionClaim } from '$lib/server/session-token';
 import { isCrossSiteWrite } from '$lib/server/same-origin';
+import { startProblems } from '$lib/server/start-check';
 
 export const init: ServerInit = async () => {
 	if (building) return;
+	const { fatal, warnings } = startProblems(process.env);
+	for (const w of warnings) console.warn(`Floorset: ${w}`);
+	if (fatal.length) {
+		for (const f of fatal) console.error(`Floorset cannot start: ${f}`);
+		process.exit(1);
+	}
 	keepHeapNearLive();
 	db();
 	const swept = describeSweep(await sweepOrphans());

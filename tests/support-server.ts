@@ -2,7 +2,7 @@
 // and upload folder, so SIGKILL never touches the server the other tests use.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { join } from 'node:path';
-import { serverArgs } from '../scripts/env';
+import { applyEnvDefaults, serverArgs } from '../scripts/env';
 
 export interface Instance {
 	base: string;
@@ -28,7 +28,8 @@ export async function startInstance(opts: {
 	}
 	let output = '';
 	const proc = spawn(process.execPath, serverArgs(), {
-		env: {
+		// The defaults `npm start` applies (BODY_SIZE_LIMIT among them), then this server's own.
+		env: applyEnvDefaults({
 			...process.env,
 			PORT: String(opts.port),
 			HOST: '127.0.0.1',
@@ -37,8 +38,9 @@ export async function startInstance(opts: {
 			UPLOAD_DIR: opts.uploadDir,
 			AUTH_SECRET: 'fault-test-secret-0123456789abcdef',
 			SMTP_HOST: '',
+			KEEP_ALIVE_TIMEOUT: '65',
 			...opts.env
-		},
+		}),
 		stdio: ['ignore', 'pipe', 'pipe']
 	});
 	proc.stdout!.on('data', (d) => (output += d));
