@@ -12,6 +12,9 @@ process.env.DATABASE_URL = `${dir}/floorset.db`;
 process.env.UPLOAD_DIR = `${dir}/uploads`;
 process.env.AUTH_SECRET = 'e2e-only-secret-not-for-production-0123456789';
 process.env.MAX_UPLOAD_MB ??= '5';
+// Test clients keep idle connections longer than Node's 5 s default: a request sent just as the
+// server closed its socket failed with ECONNRESET now and then. Keep idle sockets for 65 s.
+process.env.KEEP_ALIVE_TIMEOUT ??= '65';
 delete process.env.SMTP_HOST;
 applyEnvDefaults();
 

@@ -374,6 +374,14 @@ const TABLE: Hostile[] = [
 		body: { form: { userId: '-1' } }
 	},
 	{
+		what: 'roles for a person who does not exist',
+		as: 'admin',
+		method: 'POST',
+		path: '/admin/people?/roles',
+		body: { form: { userId: '424242', roles: 'dj' } },
+		status: 404
+	},
+	{
 		what: 'an invitation with a right-to-left override in the name',
 		as: 'admin',
 		method: 'POST',
@@ -461,19 +469,9 @@ async function send(row: Hostile) {
 		headers['content-type'] = 'application/x-www-form-urlencoded';
 		body = new URLSearchParams(b.form).toString();
 	}
-	const call = () => fetch(`${instance.base}${row.path}`, { method: row.method, headers, body });
-	try {
-		return await call();
-	} catch {
-		// An early 413 closes the connection before the body is read; the client's kept-alive
-		// socket then fails once, as any HTTP client would see, so try again on a fresh one.
-		return call();
-	}
+	// Sent once: a dropped connection is a failure, and a hostile write is never sent twice.
+	return fetch(`${instance.base}${row.path}`, { method: row.method, headers, body });
 }
-
-test('the table has at least 30 hostile inputs', () => {
-	expect(TABLE.length).toBeGreaterThanOrEqual(30);
-});
 
 for (const row of TABLE) {
 	test(`${row.method} ${row.path.split('?')[0]}: ${row.what}`, async () => {

@@ -9,6 +9,26 @@ type Result<T> = { ok: true; data: T } | { ok: false; response: Response };
 export const badRequest = (message: string, status = 400, extra: object = {}) =>
 	json({ error: message, ...extra }, { status });
 
+/**
+ * A refusal of a body too large to keep. The body is still read through and thrown away (never
+ * held: BODY_SIZE_LIMIT bounds how much arrives): answered early, with the client still sending,
+ * the unread rest stalled the connection until it timed out, and closing instead cut clients off
+ * before they read the answer.
+ */
+export async function refuseAfterDraining(
+	request: Request,
+	message: string,
+	status: number,
+	extra: object = {}
+): Promise<Response> {
+	try {
+		await request.body?.pipeTo(new WritableStream());
+	} catch {
+		/* past BODY_SIZE_LIMIT the server cuts the body off itself; the answer is the same */
+	}
+	return badRequest(message, status, extra);
+}
+
 /** The first problem of a zod error in words a person understands, with where it is. */
 export function describeIssue(error: z.ZodError): string {
 	const issue = error.issues[0];
@@ -25,7 +45,8 @@ export async function readJsonValue(request: Request): Promise<Result<unknown>> 
 	}
 	const length = Number(request.headers.get('content-length') ?? 0);
 	if (length > MAX_JSON_BYTES) {
-		return { ok: false, response: badRequest('The request body is too large.', 413) };
+		const message = 'The request body is too large.';
+		return { ok: false, response: await refuseAfterDraining(request, message, 413) };
 	}
 	const text = await request.text();
 	if (text.length > MAX_JSON_BYTES) {

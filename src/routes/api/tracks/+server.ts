@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { cachedJson } from '$lib/server/cache/cached-json';
 import { requireRight } from '$lib/server/guard';
-import { badRequest, describeIssue } from '$lib/server/json-body';
+import { badRequest, describeIssue, refuseAfterDraining } from '$lib/server/json-body';
 import {
 	BadCursorError,
 	listTracks,
@@ -36,7 +36,11 @@ export const POST = (async (event) => {
 		return badRequest('Send the upload as multipart/form-data with a file and its analysis.', 415);
 	}
 	const length = Number(event.request.headers.get('content-length') ?? 0);
-	if (length > maxUploadBytes() + ENVELOPE_BYTES) return json(tooLarge(), { status: 413 });
+	if (length > maxUploadBytes() + ENVELOPE_BYTES) {
+		const refused = tooLarge();
+		const message = refused.ok ? '' : refused.error;
+		return refuseAfterDraining(event.request, message, 413, { ok: false, status: 413 });
+	}
 	let form: FormData;
 	try {
 		form = await event.request.formData();

@@ -89,6 +89,33 @@ describe('POST /api/tracks', () => {
 		expect(s.files()).toEqual([]);
 	});
 
+	test('refused by its declared length, the body is still read through (the connection stays in step)', async () => {
+		process.env.MAX_UPLOAD_MB = '0.01';
+		resetConfig();
+		let sent = 0;
+		const chunk = new Uint8Array(64 * 1024);
+		const body = new ReadableStream<Uint8Array>({
+			pull(c) {
+				if (sent >= 8) return c.close();
+				sent++;
+				c.enqueue(chunk);
+			}
+		});
+		const request = at('/api/tracks', {
+			method: 'POST',
+			body,
+			duplex: 'half',
+			headers: {
+				'content-type': 'multipart/form-data; boundary=x',
+				'content-length': String(8 * chunk.length)
+			}
+		} as RequestInit);
+		const res = await call(list.POST, request);
+		expect(res.status).toBe(413);
+		expect(sent).toBe(8);
+		expect(s.files()).toEqual([]);
+	});
+
 	test('a dancer may not upload', async () => {
 		await expect(
 			call(list.POST, uploadRequest(wav().bytes, 'a.wav'), {}, DANCER)
