@@ -11,18 +11,7 @@ export function applyEnvDefaults(env: NodeJS.ProcessEnv = process.env) {
 	return env;
 }
 
-/**
- * Node flags for the app's server process, wherever a script starts it (start, e2e, faults, load
- * benchmarks). A ranking of every track builds ~10,000 result objects that live until the answer
- * is sent; with V8's default 16 MB semi-space they outlive a scavenge or two and are copied and
- * promoted, and garbage collection took 59 % of `npm run bench:fit`. A 32 MB semi-space halves the
- * full list's median (32 → 18 ms) and its p95 (55 → 26 ms); 64 MB gained less per megabyte.
- * Measured on this machine, not a general rule: see DEVELOPERS.md for the figures.
- */
-export const SERVER_NODE_FLAGS = ['--max-semi-space-size=32'] as const;
-
-/** Node's arguments for running the built server: its flags, then adapter-node's entry. */
+/** Node's arguments for running the built server: adapter-node's entry, with no extra flags. */
 export const serverArgs = (buildDir = process.env.FLOORSET_BUILD_DIR ?? 'build') => [
-	...SERVER_NODE_FLAGS,
 	`${buildDir}/index.js`
 ];

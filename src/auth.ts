@@ -8,7 +8,7 @@ import { z } from 'zod';
 import { emailAddress } from '$lib/schemas/email';
 import { authSecret, config } from '$lib/server/config';
 import { decoyHash, verifyPassword } from '$lib/server/passwords';
-import { SESSION_REFRESH_S } from '$lib/server/session-token';
+import { logOncePerMinute } from '$lib/server/log-once';
 import { findUserByEmail, passwordStamp } from '$lib/server/users';
 
 export const credentialsSchema = z.object({
@@ -28,14 +28,18 @@ function authConfig(): SvelteKitAuthConfig {
 		// adapter-node's ORIGIN decide which host we answer for.
 		trustHost: true,
 		useSecureCookies: config().origin.startsWith('https:'),
-		// A wrong password is an expected event, counted by the sign-in limit, not an error.
 		logger: {
 			error(e) {
-				if (e.name !== 'CredentialsSignin') console.error('[auth]', e);
+				// A wrong password is an expected event, counted by the sign-in limit, not an error.
+				if (e.name === 'CredentialsSignin') return;
+				// Anyone can send a damaged session cookie on every request (it counts as signed
+				// out and the answer clears it): one short line per cause a minute, not a stack each.
+				const cause = e.cause instanceof Error ? e.cause.message : '';
+				const line = `[auth] ${e.name}${cause ? `: ${cause}` : ''}`;
+				logOncePerMinute(line, line, console.error);
 			}
 		},
-		// The hooks re-issue the cookie through Auth.js at most once a day (session-token.ts).
-		session: { strategy: 'jwt', maxAge: 14 * 24 * 60 * 60, updateAge: SESSION_REFRESH_S },
+		session: { strategy: 'jwt', maxAge: 14 * 24 * 60 * 60 },
 		pages: { signIn: '/signin', error: '/signin' },
 		providers: [
 			Credentials({

@@ -4,14 +4,12 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { handle as authHandle } from './auth';
 import { keepPublicPages } from '$lib/server/cache/public-pages';
 import { closeDb, db } from '$lib/server/db';
-import { keepHeapNearLive } from '$lib/server/heap';
 import { isApi } from '$lib/server/guard';
 import { startCatcher, stopCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
 import { describeSweep, sweepOrphans } from '$lib/server/sweep';
 import { sessionUser } from '$lib/server/users';
-import { authSecret, config } from '$lib/server/config';
-import { sessionClaim } from '$lib/server/session-token';
+import { config } from '$lib/server/config';
 import { isCrossSiteWrite } from '$lib/server/same-origin';
 import { startProblems } from '$lib/server/start-check';
 
@@ -23,7 +21,6 @@ export const init: ServerInit = async () => {
 		for (const f of fatal) console.error(`Floorset cannot start: ${f}`);
 		process.exit(1);
 	}
-	keepHeapNearLive();
 	db();
 	const swept = describeSweep(await sweepOrphans());
 	if (swept) console.log(swept);
@@ -48,14 +45,14 @@ const onlyOurSignIn: Handle = ({ event, resolve }) => {
 	return resolve(event);
 };
 
+/** Who is signed in, as Auth.js reads its cookie (once per request); roles come fresh from the
+ * database, and a session issued under an earlier password counts as signed out. */
 const session: Handle = async ({ event, resolve }) => {
-	event.locals.user = null;
-	const claim = await sessionClaim(
-		event.cookies,
-		{ secret: authSecret(), secure: config().origin.startsWith('https:') },
-		() => event.locals.auth()
-	);
-	if (claim) event.locals.user = sessionUser(claim.uid, claim.pw);
+	const claim = (await event.locals.auth()) as { uid?: unknown; pw?: unknown } | null;
+	event.locals.user =
+		typeof claim?.uid === 'number'
+			? sessionUser(claim.uid, typeof claim.pw === 'string' ? claim.pw : null)
+			: null;
 	return resolve(event);
 };
 

@@ -535,3 +535,25 @@ test('the same file twice gives the existing track and no second row', async () 
 	expect((await again.json()).duplicate).toBe(true);
 	expect(snapshot()).toEqual(before);
 });
+
+test('a damaged session cookie: signed out, cleared in the answer, one short log line', async () => {
+	// Issue 13, finding 1: each such request logged a ~2 KB stack trace.
+	const logBefore = instance.log().length;
+	const answers = await Promise.all(
+		Array.from({ length: 50 }, () =>
+			fetch(`${instance.base}/api/evenings`, { headers: { cookie: 'authjs.session-token=x' } })
+		)
+	);
+	expect(answers.map((r) => r.status)).toEqual(Array(50).fill(401));
+	// The answer clears the cookie (Auth.js sets it empty and already expired).
+	const cleared = (
+		await fetch(`${instance.base}/signin`, {
+			headers: { cookie: 'authjs.session-token=x' }
+		}).then((r) => r.headers.getSetCookie())
+	).find((c) => c.startsWith('authjs.session-token='));
+	expect(cleared).toMatch(/^authjs\.session-token=;/);
+	expect(cleared).toMatch(/Max-Age=0|Expires=Thu, 01 Jan 1970/i);
+	const logged = instance.log().slice(logBefore).split('\n').filter(Boolean);
+	expect(logged.length, logged.join('\n')).toBeLessThanOrEqual(1);
+	expect(logged.join('').length).toBeLessThan(300);
+});
