@@ -247,6 +247,36 @@ const TABLE: Hostile[] = [
 		path: '/api/dances',
 		body: { json: { ...goodDance, counts: '32; DROP TABLE dances' } }
 	},
+	// Issue 13, finding 9: one text rule on every path; a CR/LF in a title forged an e-mail line.
+	...(
+		[
+			['a title with CR/LF in it', 'Reel\r\nBcc: someone@example.test'],
+			['a title with a NUL in it', 'Reel\u0000'],
+			['a title with a right-to-left override', 'Reel\u202e3pm.exe']
+		] as const
+	).map(([what, title]): Hostile => ({
+		what,
+		as: 'dj',
+		method: 'PATCH',
+		path: '/api/tracks/1',
+		body: { json: { version: 1, title } },
+		status: 422
+	})),
+	{
+		what: 'an evening venue with a line break in it',
+		as: 'organiser',
+		method: 'POST',
+		path: '/api/evenings',
+		body: {
+			json: {
+				title: 'Invented Night',
+				venue: 'Hall\nSubject: forged',
+				startsAt: '2027-01-08T19:00:00Z',
+				endsAt: '2027-01-08T23:00:00Z'
+			}
+		},
+		status: 422
+	},
 	{
 		what: 'a stale version',
 		as: 'dj',

@@ -1,6 +1,7 @@
 // Zod schemas for the tracks API, shared by the routes (which validate) and the music page
 // (which builds the same shapes). One schema per body or query.
 import { z } from 'zod';
+import { lineText } from '../schemas/text';
 import { TEMPO_SOURCES, VERDICTS } from '../domain';
 
 // Messages in words a DJ reads, not the validator's own wording.
@@ -33,14 +34,12 @@ export const analysisSchema = z.object({
 });
 export type Analysis = z.infer<typeof analysisSchema>;
 
-const text = (max: number) => z.string().trim().max(max);
-
 export const patchSchema = z
 	.object({
 		version: z.number().int().positive(),
-		title: text(300).min(1, 'A title cannot be empty.').optional(),
-		artist: text(300).optional(),
-		album: text(300).optional(),
+		title: lineText(300, 'title').min(1, 'A title cannot be empty.').optional(),
+		artist: lineText(300, 'artist').optional(),
+		album: lineText(300, 'album').optional(),
 		bpm: bpm.nullable().optional(),
 		/** null: the DJ has chosen between the two readings. */
 		altBpm: bpm.nullable().optional(),

@@ -1,9 +1,8 @@
 // One dance's fields, shared by the catalogue forms, the dances API and the CSV import.
 // Tags and restarts are sent as two lists; the database keeps them together as `events`.
 import { z } from 'zod';
+import { blockText, lineText } from './text';
 import { LEVELS, RHYTHMS, VERDICTS } from '../domain';
-
-const noControl = (s: string) => !/[\p{Cc}\u202a-\u202e\u2066-\u2069]/u.test(s.replace(/\n/g, ''));
 
 const wholeNumber = (what: string, min: number, max: number) =>
 	z
@@ -30,12 +29,7 @@ export const restartSchema = z.object({
 });
 
 export const danceFields = z.object({
-	name: z
-		.string({ message: 'Enter a name.' })
-		.trim()
-		.min(1, 'Enter a name.')
-		.max(120, 'Keep the name under 120 characters.')
-		.refine(noControl, 'Remove control characters.'),
+	name: lineText(120, 'name').min(1, 'Enter a name.'),
 	counts: wholeNumber('counts', 1, 1024),
 	walls: z.union([z.literal(1), z.literal(2), z.literal(4)], {
 		message: 'A dance has 1, 2 or 4 walls.'
@@ -57,16 +51,8 @@ export const danceFields = z.object({
 		.array(restartSchema, { message: 'Send restarts as a list.' })
 		.max(50, 'At most 50 restarts.')
 		.default([]),
-	notes: z
-		.string({ message: 'Send the notes as text.' })
-		.max(4000, 'Keep the notes under 4,000 characters.')
-		.default(''),
-	choreographer: z
-		.string({ message: 'Send the choreographer as text.' })
-		.trim()
-		.max(120, 'Keep the choreographer under 120 characters.')
-		.refine(noControl, 'Remove control characters.')
-		.default(''),
+	notes: blockText(4000, 'notes').default(''),
+	choreographer: lineText(120, 'choreographer').default(''),
 	wellKnown: z.boolean({ message: 'wellKnown is true or false.' }).default(false)
 });
 

@@ -1,21 +1,13 @@
 // Shared by the evening forms and the evenings API: an evening with its sections, the planner's
 // settings, a run-order save and a planning request.
 import { z } from 'zod';
+import { blockText, lineText } from './text';
 import { CROWD_MIXES, ENTRY_KINDS, SECTION_KINDS } from '../domain';
 
 const id = z
 	.number({ message: 'Give ids and versions as numbers.' })
 	.int('Ids and versions are whole numbers.')
 	.positive('Ids and versions are above 0.');
-const plainText = (max: number, what: string) =>
-	z
-		.string()
-		.trim()
-		.max(max, `Keep the ${what} under ${max} characters.`)
-		.refine((s) => !/[\p{Cc}\u202a-\u202e\u2066-\u2069]/u.test(s.replace(/[\n\r\t]/g, '')), {
-			message: `Remove control characters from the ${what}.`
-		});
-
 /** An ISO 8601 date-time with an offset or Z, as milliseconds since the epoch. */
 export const isoInstant = z.iso
 	.datetime({ offset: true, message: 'Give a date-time in ISO 8601, e.g. 2026-12-11T19:00:00Z.' })
@@ -25,7 +17,7 @@ export const sectionInput = z.object({
 	/** An existing section keeps its id (and the run order's links to it). */
 	id: id.optional(),
 	kind: z.enum(SECTION_KINDS, { message: 'Choose what kind of section this is.' }),
-	title: plainText(100, 'section title').default(''),
+	title: lineText(100, 'section title').default(''),
 	startsAt: isoInstant,
 	endsAt: isoInstant,
 	danceId: id.nullable().optional(),
@@ -82,12 +74,12 @@ export const planSettingsInput = z.object({
 export type PlanSettingsInput = z.infer<typeof planSettingsInput>;
 
 const eveningFields = {
-	title: plainText(120, 'title').min(1, 'Give the evening a title.'),
-	venue: plainText(200, 'venue').default(''),
+	title: lineText(120, 'title').min(1, 'Give the evening a title.'),
+	venue: lineText(200, 'venue').default(''),
 	startsAt: isoInstant,
 	endsAt: isoInstant,
 	crowd: z.enum(CROWD_MIXES, { message: 'Choose the crowd’s level mix.' }).default('mixed'),
-	notes: plainText(2000, 'notes').default(''),
+	notes: blockText(2000, 'notes').default(''),
 	sections: z.array(sectionInput).max(40, 'Keep it to 40 sections.').default([]),
 	planSettings: planSettingsInput.optional()
 };
@@ -99,11 +91,11 @@ export type EveningCreate = z.infer<typeof eveningCreate>;
 export const eveningPatch = z
 	.object({
 		title: eveningFields.title.optional(),
-		venue: plainText(200, 'venue').optional(),
+		venue: lineText(200, 'venue').optional(),
 		startsAt: isoInstant.optional(),
 		endsAt: isoInstant.optional(),
 		crowd: z.enum(CROWD_MIXES, { message: 'Choose the crowd’s level mix.' }).optional(),
-		notes: plainText(2000, 'notes').optional(),
+		notes: blockText(2000, 'notes').optional(),
 		sections: z.array(sectionInput).max(40, 'Keep it to 40 sections.').optional(),
 		planSettings: planSettingsInput.optional(),
 		/** The evening's version, when the client wants a stale edit refused. */
@@ -136,12 +128,12 @@ export const entryInput = z
 			.max(24 * 3600)
 			.optional(),
 		locked: z.boolean().default(false),
-		text: plainText(500, 'text').default(''),
+		text: lineText(500, 'text').default(''),
 		reasons: z.array(z.string().max(300)).max(30).default([])
 	})
 	.extend({
 		/** The planner's name for `text` (a teach's or break's title): a plan saves as it came. */
-		title: plainText(500, 'title').optional()
+		title: lineText(500, 'title').optional()
 	})
 	.superRefine((e, ctx) => {
 		if (e.kind === 'dance' && (!e.danceId || !e.trackId)) {
@@ -172,18 +164,18 @@ export const planRequest = z.object({
 const hm = z.string().regex(/^\d{2}:\d{2}$/, 'Give a time as HH:MM.');
 export const eveningForm = z.object({
 	title: eveningFields.title,
-	venue: plainText(200, 'venue'),
+	venue: lineText(200, 'venue'),
 	date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date.'),
 	start: hm,
 	end: hm,
 	crowd: z.enum(CROWD_MIXES, { message: 'Choose the crowd’s level mix.' }),
-	notes: plainText(2000, 'notes'),
+	notes: blockText(2000, 'notes'),
 	sections: z
 		.array(
 			z.object({
 				id: z.coerce.number().int().positive().optional(),
 				kind: z.enum(SECTION_KINDS, { message: 'Choose what kind of section this is.' }),
-				title: plainText(100, 'section title'),
+				title: lineText(100, 'section title'),
 				start: hm,
 				end: hm,
 				danceId: z.coerce.number().int().positive().optional(),

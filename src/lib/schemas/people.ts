@@ -1,5 +1,6 @@
 // Shared by the People page's form and the invitations API.
 import { z } from 'zod';
+import { lineText } from './text';
 import { ROLES } from '../domain';
 import { emailAddress } from './email';
 
@@ -10,12 +11,7 @@ export const roleList = z
 
 export const inviteSchema = z.object({
 	email: emailAddress,
-	name: z
-		.string()
-		.trim()
-		.min(1, 'Enter a name.')
-		.max(100, 'Keep the name under 100 characters.')
-		.refine((s) => !/[\p{Cc}\u202a-\u202e\u2066-\u2069]/u.test(s), 'Remove control characters.'),
+	name: lineText(100, 'name').min(1, 'Enter a name.'),
 	roles: roleList
 });
 

@@ -9,13 +9,14 @@ import { lessonMusic } from '$lib/server/fits/lesson';
 import { fitsForDance } from '$lib/server/fits/ranking';
 import { setVerdict } from '$lib/server/fits/verdicts';
 import { fitVerdictSchema } from '$lib/schemas/dance';
+import { blockText } from '$lib/schemas/text';
 import type { Actions, PageServerLoad } from './$types';
 
 /** Tracks shown in the fits table; the API gives more with ?limit=. */
 const SHOWN = 30;
 
 const requestSchema = z.object({
-	message: z.string().trim().max(500, 'Keep the message under 500 characters.')
+	message: blockText(500, 'message').trim()
 });
 
 export const load = ((event) => {

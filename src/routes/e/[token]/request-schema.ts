@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-const text = (max: number, message: string) => z.string().trim().max(max, message).default('');
+import { blockText, lineText } from '$lib/schemas/text';
 
 /** The public request form. Every field is length-limited; `website` is the bots' trap. */
 export const requestSchema = z
@@ -11,9 +11,9 @@ export const requestSchema = z
 			.regex(/^\d{0,9}$/, 'Choose a dance from the list.')
 			.default('')
 			.transform((v) => (v ? Number(v) : undefined)),
-		danceName: text(80, 'Keep the dance name under 80 characters.'),
-		message: text(280, 'Keep the note under 280 characters.'),
-		name: text(40, 'Keep your name under 40 characters.'),
+		danceName: lineText(80, 'dance name').default(''),
+		message: blockText(280, 'note').trim().default(''),
+		name: lineText(40, 'name').default(''),
 		website: z.string().max(200).default('')
 	})
 	.refine((v) => v.danceId !== undefined || v.danceName.length > 0, {
