@@ -1,17 +1,10 @@
 // The words of one fit result, in reading order: the team's verdict, meter, tempo, phrasing,
 // walls, ending, length. A ReasonMemo shares identical sentences across the tracks of one
 // ranking (one dance, one settings object), which keeps a 10,000-track list light on memory.
+import { minutesSeconds } from '../format';
 import type { DanceFacts, Verdict } from '../domain';
 import type { PhrasingDetail } from './phrasing';
-import {
-	bpmText,
-	driftReason,
-	durationText,
-	plural,
-	rateText,
-	tempoReason,
-	wallWords
-} from './reasons';
+import { bpmText, driftReason, plural, rateText, tempoReason, wallWords } from './reasons';
 import type { FitSettings } from './settings';
 import type { TempoFit } from './tempo-fit';
 
@@ -125,7 +118,7 @@ export function fitReasons(
 		const played = Math.round(f.playedS);
 		let long = m?.long.get(played);
 		if (long === undefined) {
-			long = `a long song as played (${durationText(played)})`;
+			long = `a long song as played (${minutesSeconds(played)})`;
 			m?.long.set(played, long);
 		}
 		words.push(long);

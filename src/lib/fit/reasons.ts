@@ -17,12 +17,6 @@ export function percentText(fraction: number): string {
 	return `${Math.round(fraction * 1000) / 10} %`;
 }
 
-/** 370 → "6:10". */
-export function durationText(seconds: number): string {
-	const s = Math.round(seconds);
-	return `${Math.floor(s / 60)}:${String(s % 60).padStart(2, '0')}`;
-}
-
 export function rangeText(bpmMin: number, bpmMax: number): string {
 	return bpmMin === bpmMax ? `${bpmText(bpmMin)} BPM` : `${bpmText(bpmMin)}–${bpmText(bpmMax)} BPM`;
 }

@@ -1,6 +1,7 @@
 // The music table's features and columns (TanStack Table v9: features and row models are
 // registered explicitly, so only what the table uses is bundled). Kept outside the component
 // so they are created once, as the adapter's documentation advises.
+import { minutesSeconds } from '../format';
 import {
 	columnFilteringFeature,
 	columnVisibilityFeature,
@@ -45,9 +46,6 @@ export const features = tableFeatures({
 
 export type Features = typeof features;
 type Col = ColumnDef<Features, TrackJson>;
-
-export const minutes = (s: number) =>
-	`${Math.floor(s / 60)}:${String(Math.round(s % 60)).padStart(2, '0')}`;
 
 const text = (key: 'title' | 'artist' | 'album', header: string, size: string): Col => ({
 	id: key,
@@ -128,7 +126,7 @@ export const columns: Col[] = [
 		'Length',
 		(t) => t.durationS,
 		'5.5rem',
-		(t) => minutes(t.durationS)
+		(t) => minutesSeconds(t.durationS)
 	),
 	number(
 		'confidence',

@@ -43,9 +43,3 @@ export function longDate(ms: number, timeZone: string): string {
 		year: 'numeric'
 	}).format(new Date(ms));
 }
-
-/** "3:25" for a length in seconds. */
-export function minSec(seconds: number): string {
-	const s = Math.max(0, Math.round(seconds));
-	return `${Math.floor(s / 60)}:${String(s % 60).padStart(2, '0')}`;
-}

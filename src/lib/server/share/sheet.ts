@@ -130,11 +130,7 @@ export function wallDate(ms: number, timeZone: string): string {
 	return `${get('weekday')} ${get('day')} ${get('month')} ${get('year')}`;
 }
 
-/** 215.4 s → "3:35". */
-export function minutesSeconds(seconds: number): string {
-	const s = Math.max(0, Math.round(seconds));
-	return `${Math.floor(s / 60)}:${String(s % 60).padStart(2, '0')}`;
-}
+export { minutesSeconds } from '../../format';
 
 /** "0.90" for a rate, always two decimals so columns line up. */
 export const rateText = (rate: number) => rate.toFixed(2);
