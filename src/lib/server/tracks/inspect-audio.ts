@@ -3,6 +3,7 @@
 // the format and the tags. Whatever the browser claimed, this decides what is stored.
 import { fileTypeFromBuffer } from 'file-type';
 import { parseBuffer } from 'music-metadata';
+import { minutesSeconds } from '../../format';
 
 /** Types a browser can decode and a DJ brings (extension → the Content-Type we serve). */
 const ACCEPTED: Record<string, string> = {
@@ -19,6 +20,20 @@ const ACCEPTED: Record<string, string> = {
 
 /** Shorter than this is not a song (and is what a cut-off file usually leaves). */
 const MIN_DURATION_S = 1;
+
+/** An MP3 whose bytes hold less than this share of what its header promises is cut off. */
+const CUT_OFF_SHARE = 0.9;
+
+/**
+ * How many seconds of MPEG audio the bytes can hold at the stream's (average) bitrate. A Xing or
+ * VBRI header states a frame count, so music-metadata's duration is the header's promise, not
+ * the audio present: a download cut short kept its full length (dead air in a planned night).
+ * Tags make a file longer than its audio, never shorter, so this errs towards keeping a file.
+ */
+function mp3SecondsPresent(size: number, bitrate: number | undefined): number | null {
+	if (!bitrate || !Number.isFinite(bitrate) || bitrate <= 0) return null;
+	return (size * 8) / bitrate;
+}
 
 export interface AudioFacts {
 	ext: string;
@@ -63,9 +78,19 @@ export async function inspectAudio(bytes: Uint8Array): Promise<Inspection> {
 	if (meta.quality.warnings.some((w) => /exceed\w* file length/i.test(w.message))) {
 		return refuse(422, 'The file is cut off: it ends before its audio does.');
 	}
-	const durationS = meta.format.duration;
+	let durationS = meta.format.duration;
 	if (!durationS || !Number.isFinite(durationS) || durationS < MIN_DURATION_S) {
 		return refuse(422, 'The file holds no playable audio (it is cut off or too short).');
+	}
+	if (type.ext === 'mp3') {
+		const there = mp3SecondsPresent(bytes.length, meta.format.bitrate);
+		if (there !== null && there < durationS * CUT_OFF_SHARE) {
+			return refuse(
+				422,
+				`The file is cut off: its header says ${minutesSeconds(durationS)}, but only about ${minutesSeconds(there)} of audio is there.`
+			);
+		}
+		if (there !== null) durationS = Math.min(durationS, there);
 	}
 	const c = meta.common;
 	const format = [meta.format.container, meta.format.codec].filter(Boolean).join(' · ');

@@ -6,7 +6,7 @@ import { resetConfig } from '../config';
 import { tracks } from '../db/schema';
 import type { Storage } from '../storage';
 import { makeTestDb } from '../testing/test-db';
-import { analysisJson, mp3, png, tempStorage, text, wav } from './test-fixtures';
+import { analysisJson, mp3, mp3WithXing, png, tempStorage, text, wav } from './test-fixtures';
 import { uploadTrack } from './upload';
 
 let t: ReturnType<typeof makeTestDb>;
@@ -175,6 +175,25 @@ describe('bad input: a clear 4xx with an error, no row, no file', () => {
 		expect(!r.ok && r.error).toContain('0.05 MB');
 		expect(rows()).toHaveLength(0);
 		expect(s.files()).toEqual([]);
+	});
+
+	test('an MP3 whose header promises more than its bytes hold is refused as cut off', async () => {
+		// Issue 13, finding 7. 20 s at 22,050 Hz in 576-sample frames is 766 frames (MPEG-2 Layer III).
+		const whole = mp3(120, 20);
+		const frames = Math.round((20 * 22050) / 576);
+		const ok = await upload(mp3WithXing(whole, frames), { name: 'whole.mp3' });
+		expect(ok.ok && ok.track.durationS).toBeCloseTo(20, 0);
+		const cut = await upload(mp3WithXing(whole, frames).slice(0, 30_000), { name: 'cut.mp3' });
+		expect(cut).toMatchObject({ ok: false, status: 422 });
+		expect(!cut.ok && cut.error).toMatch(/cut off: its header says 0:20, but only about 0:0\d/);
+		expect(rows()).toHaveLength(1);
+	});
+
+	test('an MP3 cut short without such a header keeps the length of the audio there', async () => {
+		// Without a frame count the length comes from the bytes at the frames' bitrate:
+		// 30,000 bytes × 8 ÷ 40,000 b/s = 6 s (header arithmetic, ISO/IEC 13818-3 bitrates).
+		const r = await upload(mp3(120, 20).slice(0, 30_000), { name: 'short.mp3' });
+		expect(r.ok && r.track.durationS).toBeCloseTo(6, 0);
 	});
 
 	test('the error messages name the problem', async () => {
