@@ -37,7 +37,7 @@ for (const row of MATRIX) {
 					: who !== 'anon' &&
 						(row.allowed as readonly string[]).some((r) => r === who || who === 'admin');
 			if (allowed) {
-				expect([401, 403], label).not.toContain(status);
+				expect(status, label).toBe(row.status);
 			} else if (who === 'anon') {
 				expect(status, label).toBe(401);
 			} else {

@@ -3,8 +3,9 @@
 // signed-out visitor; src/routes/route-coverage.test.ts fails when a +server.ts route exists
 // that this table does not list. Add a row with every new route.
 //
-// `allowed`: roles that get through (any answer but 401/403 and never a 5xx; a body that is
-// deliberately incomplete may give 4xx validation errors, which still proves the gate opened).
+// `allowed`: roles that get through, each with exactly `status` (a body that is deliberately
+// incomplete gives its validation error, an unknown id its 404: proof the gate opened and the
+// route itself answered, not a missing route).
 // Everyone else signed in must get 403; a signed-out visitor 401 — unless `public` is set.
 import type { DemoRole } from './helpers';
 
@@ -16,6 +17,8 @@ export interface MatrixRow {
 	path: string;
 	allowed: readonly DemoRole[] | 'everyone signed in';
 	public?: boolean;
+	/** The status every allowed role gets: the gate opened and the route answered as it should. */
+	status: number;
 	/** JSON body to send; mutating calls use a harmless or invalid body. */
 	body?: unknown;
 }
@@ -25,11 +28,18 @@ const TEAM = ['admin', 'organiser', 'dj', 'instructor'] as const;
 export const MATRIX: MatrixRow[] = [
 	// evenings (issue 5): reads for every role (dancers see published evenings only), writes for
 	// organisers; bodies are invalid (422) or ids missing (404) so the matrix changes nothing.
-	{ method: 'GET', route: '/api/evenings', path: '/api/evenings', allowed: 'everyone signed in' },
+	{
+		method: 'GET',
+		route: '/api/evenings',
+		path: '/api/evenings',
+		status: 200,
+		allowed: 'everyone signed in'
+	},
 	{
 		method: 'POST',
 		route: '/api/evenings',
 		path: '/api/evenings',
+		status: 422,
 		allowed: ['organiser'],
 		body: {}
 	},
@@ -37,12 +47,14 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/evenings/[id]',
 		path: '/api/evenings/1',
+		status: 200,
 		allowed: 'everyone signed in'
 	},
 	{
 		method: 'PATCH',
 		route: '/api/evenings/[id]',
 		path: '/api/evenings/1',
+		status: 422,
 		allowed: ['organiser'],
 		body: { startsAt: 'not a date' }
 	},
@@ -50,12 +62,14 @@ export const MATRIX: MatrixRow[] = [
 		method: 'DELETE',
 		route: '/api/evenings/[id]',
 		path: '/api/evenings/999999',
+		status: 404,
 		allowed: ['organiser']
 	},
 	{
 		method: 'POST',
 		route: '/api/evenings/[id]/plan',
 		path: '/api/evenings/1/plan',
+		status: 422,
 		allowed: ['organiser'],
 		body: { seed: 'not a number' }
 	},
@@ -63,12 +77,14 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/evenings/[id]/run-order',
 		path: '/api/evenings/1/run-order',
+		status: 200,
 		allowed: 'everyone signed in'
 	},
 	{
 		method: 'PUT',
 		route: '/api/evenings/[id]/run-order',
 		path: '/api/evenings/1/run-order',
+		status: 409,
 		allowed: ['organiser'],
 		body: { version: 0, entries: [] }
 	},
@@ -76,6 +92,7 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/evenings/[id]/suggestions',
 		path: '/api/evenings/1/suggestions?danceId=1',
+		status: 200,
 		allowed: ['organiser']
 	},
 	// end of evenings rows
@@ -91,18 +108,21 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: `/api/evenings/[id]/export.${ext}`,
 		path: `/api/evenings/1/export.${ext}`,
+		status: 200,
 		allowed: 'everyone signed in'
 	})),
 	{
 		method: 'GET',
 		route: '/api/evenings/[id]/email',
 		path: '/api/evenings/1/email',
+		status: 200,
 		allowed: ['organiser']
 	},
 	{
 		method: 'POST',
 		route: '/api/evenings/[id]/email',
 		path: '/api/evenings/1/email',
+		status: 422,
 		allowed: ['organiser'],
 		body: {}
 	},
@@ -110,12 +130,14 @@ export const MATRIX: MatrixRow[] = [
 		method: 'POST',
 		route: '/api/evenings/[id]/publish',
 		path: '/api/evenings/999999/publish',
+		status: 404,
 		allowed: ['organiser']
 	},
 	{
 		method: 'DELETE',
 		route: '/api/evenings/[id]/publish',
 		path: '/api/evenings/999999/publish',
+		status: 404,
 		allowed: ['organiser']
 	},
 	// end of sharing rows
@@ -125,19 +147,29 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/dances',
 		path: '/api/dances?level=beginner',
+		status: 200,
 		allowed: 'everyone signed in'
 	},
-	{ method: 'POST', route: '/api/dances', path: '/api/dances', allowed: ['instructor'], body: {} },
+	{
+		method: 'POST',
+		route: '/api/dances',
+		path: '/api/dances',
+		status: 422,
+		allowed: ['instructor'],
+		body: {}
+	},
 	{
 		method: 'GET',
 		route: '/api/dances/[id]',
 		path: '/api/dances/1',
+		status: 200,
 		allowed: 'everyone signed in'
 	},
 	{
 		method: 'PATCH',
 		route: '/api/dances/[id]',
 		path: '/api/dances/1',
+		status: 422,
 		allowed: ['instructor'],
 		body: {}
 	},
@@ -145,6 +177,7 @@ export const MATRIX: MatrixRow[] = [
 		method: 'DELETE',
 		route: '/api/dances/[id]',
 		path: '/api/dances/999999',
+		status: 404,
 		allowed: ['instructor']
 	},
 	{
@@ -152,32 +185,44 @@ export const MATRIX: MatrixRow[] = [
 		// The fits carry the team's verdicts on the whole library (issue 13, finding 10).
 		route: '/api/dances/[id]/fits',
 		path: '/api/dances/1/fits?limit=5',
+		status: 200,
 		allowed: ['dj', 'instructor', 'organiser']
 	},
 	{
 		method: 'GET',
 		route: '/api/dances/[id]/sheet',
 		path: '/api/dances/1/sheet',
+		status: 404,
 		allowed: 'everyone signed in'
 	},
 	{
 		method: 'GET',
 		route: '/api/dances/export',
 		path: '/api/dances/export',
+		status: 200,
 		allowed: 'everyone signed in'
 	},
 	{
 		method: 'GET',
 		route: '/api/tracks/[id]/fits',
 		path: '/api/tracks/1/fits?limit=5',
+		status: 200,
 		allowed: ['dj', 'instructor', 'organiser']
 	},
-	{ method: 'PUT', route: '/api/fits', path: '/api/fits', allowed: ['dj', 'instructor'], body: {} },
+	{
+		method: 'PUT',
+		route: '/api/fits',
+		path: '/api/fits',
+		status: 422,
+		allowed: ['dj', 'instructor'],
+		body: {}
+	},
 	// end of dance catalogue and fits rows
 	{
 		method: 'GET',
 		route: '/healthz',
 		path: '/healthz',
+		status: 200,
 		allowed: 'everyone signed in',
 		public: true
 	},
@@ -186,15 +231,17 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/public/play/[evening]/[track]',
 		path: '/api/public/play/1/1',
+		status: 400,
 		allowed: 'everyone signed in',
 		public: true
 	},
-	{ method: 'GET', route: '/api/me', path: '/api/me', allowed: 'everyone signed in' },
-	{ method: 'GET', route: '/api/people', path: '/api/people', allowed: ['admin'] },
+	{ method: 'GET', route: '/api/me', path: '/api/me', status: 200, allowed: 'everyone signed in' },
+	{ method: 'GET', route: '/api/people', path: '/api/people', status: 200, allowed: ['admin'] },
 	{
 		method: 'POST',
 		route: '/api/invitations',
 		path: '/api/invitations',
+		status: 422,
 		allowed: ['admin'],
 		body: { email: 'not-an-email' }
 	},
@@ -203,12 +250,14 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/tracks',
 		path: '/api/tracks?limit=5',
+		status: 200,
 		allowed: ['dj', 'instructor', 'organiser']
 	},
 	{
 		method: 'POST',
 		route: '/api/tracks',
 		path: '/api/tracks',
+		status: 415,
 		allowed: ['dj'],
 		body: { not: 'multipart' }
 	},
@@ -216,15 +265,30 @@ export const MATRIX: MatrixRow[] = [
 		method: 'GET',
 		route: '/api/tracks/[id]',
 		path: '/api/tracks/1',
+		status: 200,
 		allowed: ['dj', 'instructor', 'organiser']
 	},
-	{ method: 'PATCH', route: '/api/tracks/[id]', path: '/api/tracks/1', allowed: ['dj'], body: {} },
+	{
+		method: 'PATCH',
+		route: '/api/tracks/[id]',
+		path: '/api/tracks/1',
+		status: 422,
+		allowed: ['dj'],
+		body: {}
+	},
 	// A track id that does not exist, so the allowed roles get 404 and nothing is deleted.
-	{ method: 'DELETE', route: '/api/tracks/[id]', path: '/api/tracks/999999', allowed: ['dj'] },
+	{
+		method: 'DELETE',
+		route: '/api/tracks/[id]',
+		path: '/api/tracks/999999',
+		status: 404,
+		allowed: ['dj']
+	},
 	{
 		method: 'GET',
 		route: '/api/tracks/[id]/audio',
 		path: '/api/tracks/1/audio',
+		status: 200,
 		allowed: ['dj', 'instructor', 'organiser']
 	}
 	// end of music library rows
