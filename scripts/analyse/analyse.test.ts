@@ -16,7 +16,13 @@ const dir = mkdtempSync(join(tmpdir(), 'floorset-analyse-test-'));
 const file = (name: string) => join(dir, name);
 let analyser: Analyser;
 
-describe.skipIf(!existsSync('/usr/bin/chromium'))('analyse-browser in Chromium', () => {
+// No Chromium is a failure with the fix in its message, never a silent skip: `npm test` installs
+// it first (scripts/ensure-chromium.ts).
+it('Debian Chromium is installed (apt-get install chromium)', () => {
+	expect(existsSync('/usr/bin/chromium'), 'run: apt-get install -y chromium').toBe(true);
+});
+
+describe('analyse-browser in Chromium', () => {
 	beforeAll(async () => {
 		const a = generateSong({ bpm: 100, durationS: 60, pad: true, seed: 11 });
 		writeFileSync(file('a.mp3'), encodeMp3(a.samples, a.sampleRate, 40));
