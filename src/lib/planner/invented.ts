@@ -4,7 +4,8 @@ import { LEVELS, type CrowdMix, type Level, type Rhythm } from '../domain';
 import { createRng, type Rng } from './rng';
 import type { PlanDance, PlanFit, PlanInput, PlanSection, PlanTrack } from './types';
 
-// Country-western ranges from REFERENCES.md (studios, secondary): two-step 182–198, waltz 84–100,
+// Country-western ranges as teachers quote them (common practice, no source; rhythm-presets.ts):
+// two-step 182–198, waltz 84–100,
 // west coast swing 112–128, cha-cha 100–116, east coast swing 142–158, polka 114–130. The others
 // are invented for the demo (no citable range: common practice, from memory).
 const BANDS: [Rhythm, number, number][] = [

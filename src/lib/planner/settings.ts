@@ -32,7 +32,7 @@ export const DEFAULT_SETTINGS: PlanSettings = {
 	maxConsecutiveFast: 2,
 	// 150 BPM sits between the quick rhythms (two-step 182–198, east coast swing 142–158) and the
 	// steady ones (cha-cha 100–116, west coast swing 112–128): REFERENCES.md's country-western
-	// ranges (secondary, studios), threshold chosen from them.
+	// ranges (common practice, no source: see rhythm-presets.ts), threshold chosen from them.
 	fastBpm: 150,
 	gapS: 15,
 	teachLengthMin: 10,

@@ -11,8 +11,9 @@ export interface RhythmPreset {
 	source: string;
 }
 
-// "Country-western competition ranges quoted by studios (secondary)", REFERENCES.md.
-const STUDIOS = 'country-western competition ranges quoted by studios (secondary)';
+// Country-western tempo ranges as dance teachers commonly quote them. No document was found to
+// name (REFERENCES.md, "Dance tempi"), so they are marked as common practice, from memory.
+const STUDIOS = 'common practice (no source): country-western ranges as teachers quote them';
 const PRACTICE = 'common practice (no source), from memory';
 
 export const RHYTHM_PRESETS: Record<Rhythm, RhythmPreset> = {
