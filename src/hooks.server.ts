@@ -4,6 +4,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { handle as authHandle } from './auth';
 import { keepPublicPages } from '$lib/server/cache/public-pages';
 import { closeDb, db } from '$lib/server/db';
+import { closePlanPool } from '$lib/server/evenings/plan-pool';
 import { isApi } from '$lib/server/guard';
 import { startCatcher, stopCatcher } from '$lib/server/mail/catcher';
 import { mailIsCaptured } from '$lib/server/mail/send';
@@ -29,6 +30,7 @@ export const init: ServerInit = async () => {
 	// what we opened (the mail catcher's socket, the database) so the process really exits.
 	process.once('sveltekit:shutdown' as 'exit', () => {
 		void stopCatcher();
+		void closePlanPool();
 		closeDb();
 	});
 };

@@ -2,7 +2,7 @@
 export class EveningError extends Error {
 	constructor(
 		message: string,
-		readonly status: 404 | 409 | 422,
+		readonly status: 404 | 409 | 422 | 429 | 503,
 		readonly extra: Record<string, unknown> = {}
 	) {
 		super(message);

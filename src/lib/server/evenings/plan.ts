@@ -8,6 +8,9 @@ import { EveningError } from './errors';
 import { planInputFor } from './plan-input';
 import { saveRunOrder, type SaveResult } from './run-order';
 
+/** What the planner needs for the evening, read from the database (on the server's thread). */
+export { planInputFor } from './plan-input';
+
 /** The planner's proposal for the evening; `draft` is the editor's unsaved run order, if any. */
 export function planFor(
 	eveningId: number,

@@ -21,3 +21,14 @@ export function answer(fn: () => Response): Response {
 		throw e;
 	}
 }
+
+/** `answer` for work that waits (a plan made in a worker thread). */
+export async function answerAsync(fn: () => Promise<Response>): Promise<Response> {
+	try {
+		return await fn();
+	} catch (e) {
+		if (e instanceof EveningError)
+			return json({ error: e.message, ...e.extra }, { status: e.status });
+		throw e;
+	}
+}
