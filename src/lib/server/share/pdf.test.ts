@@ -39,6 +39,15 @@ describe('PDF run sheet', () => {
 		expect(text).toContain('Global standard for safe listening venues and events, 2022');
 	});
 
+	test('embeds the shipped Atkinson Hyperlegible TrueType, regular and bold', async () => {
+		// A subset font's BaseFont is a six-letter tag, '+', and the PostScript name (ISO 32000-1,
+		// 9.6.4); font dictionaries are plain objects, readable in the file as it is.
+		const raw = (await buildPdf(SHEET)).toString('latin1');
+		expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+AtkinsonHyperlegible-Regular/);
+		expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+AtkinsonHyperlegible-Bold/);
+		expect(raw).toMatch(/\/FontFile2/); // TrueType font program (9.9)
+	});
+
 	test('a long run order flows onto more pages, each with its page number', async () => {
 		const many = Array.from({ length: 80 }, (_, i) => ({
 			...SHEET.entries[2],

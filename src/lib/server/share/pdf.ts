@@ -1,27 +1,23 @@
 // The run sheet as a PDF, made on the server with pdfkit in the app's own shipped font (Atkinson
-// Hyperlegible from @fontsource, unpacked from WOFF). Large type: the
+// Hyperlegible, as TrueType: fonts/README.md). Large type: the
 // sheet is read at arm's length in a dim hall. It draws the same view as the print page.
 import PDFDocument from 'pdfkit';
-import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import type { RunSheet } from './sheet';
 import { sheetView } from './sheet-view';
-import { woffToSfnt } from './woff';
+import regular from './fonts/atkinson-hyperlegible-latin-400.ttf?inline';
+import bold from './fonts/atkinson-hyperlegible-latin-700.ttf?inline';
 
 type View = ReturnType<typeof sheetView>;
 type Row = View['entries'][number];
 type Doc = InstanceType<typeof PDFDocument>;
 
-const require = createRequire(import.meta.url);
+// The shipped TrueType files (fonts/README.md), inlined into the server bundle by Vite.
+const FONTS = { 400: regular, 700: bold } as const;
 const fonts = new Map<400 | 700, Buffer>();
-/** The shipped font, unpacked from WOFF once per process (see woff.ts for why). */
 function font(weight: 400 | 700): Buffer {
 	let bytes = fonts.get(weight);
 	if (!bytes) {
-		const file = require.resolve(
-			`@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-${weight}-normal.woff`
-		);
-		bytes = woffToSfnt(readFileSync(file));
+		bytes = Buffer.from(FONTS[weight].slice(FONTS[weight].indexOf(',') + 1), 'base64');
 		fonts.set(weight, bytes);
 	}
 	return bytes;
