@@ -1,7 +1,12 @@
 // The run order being edited in the browser: entries in order, their computed start times, and
 // the edits (move, insert, remove, lock, swap). Saving and planning live in the editor component.
 import type { EntryKind, Level, Rhythm } from '../../domain';
-import { DEFAULT_DURATION_S, recomputeStarts, sectionAfterMove, type SectionStart } from './timing';
+import {
+	DEFAULT_DURATION_S,
+	recomputeStarts,
+	sectionAfterMove,
+	type SectionStart
+} from '$lib/run-order/timing';
 
 export interface DraftEntry {
 	/** A key for the list and the drag-and-drop zone; not the database id. */

@@ -2,7 +2,7 @@
 // start, the catalogue, fits (team verdicts and computed scores), requests, must-play and
 // never-play lists, settings, and the locked entries of the current (or the editor's) run order.
 import { and, eq, inArray, isNotNull } from 'drizzle-orm';
-import { DEFAULT_DURATION_S, recomputeStarts } from '../../components/evening/timing';
+import { DEFAULT_DURATION_S, recomputeStarts } from '../../run-order/timing';
 import { rankFits } from '../../fit';
 import type { LockedEntry, PlanFit, PlanInput } from '../../planner';
 import { planSettingsInput, type EntryInput } from '../../schemas/evening';

@@ -2,7 +2,7 @@
 // people editing at once never overwrite each other; start times are recomputed here.
 import { and, eq, sql } from 'drizzle-orm';
 import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
-import { DEFAULT_DURATION_S, recomputeStarts } from '../../components/evening/timing';
+import { DEFAULT_DURATION_S, recomputeStarts } from '../../run-order/timing';
 import type { EntryInput } from '../../schemas/evening';
 import { db } from '../db';
 import { preparedFor } from '../db/prepared';

@@ -1,6 +1,6 @@
 // Start times of a run order, shared by the editor (to show times while editing) and the server
 // (which recomputes them on every save). Pure TypeScript: no framework imports.
-import type { EntryKind } from '../../domain';
+import type { EntryKind } from '../domain';
 
 export interface TimedEntry {
 	kind: EntryKind;
