@@ -9,21 +9,13 @@ import { openDb, useDb } from '../src/lib/server/db';
 import { dances, fits, tracks, users } from '../src/lib/server/db/schema';
 import { fitsForDance, fitsForTrack } from '../src/lib/server/fits/ranking';
 import { loadTrackFacts } from '../src/lib/server/fits/load';
+import { seededRandom } from '../src/lib/random';
 
 const TRACKS = 10_000;
 const RUNS = 40;
 const WARM_UP = 5;
 
-/** mulberry32: a small seeded generator. */
-function random(seed: number): () => number {
-	return () => {
-		seed = (seed + 0x6d2b79f5) | 0;
-		let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-	};
-}
-const rand = random(20261202);
+const rand = seededRandom(20261202);
 const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
 
 const dir = mkdtempSync(join(tmpdir(), 'floorset-bench-'));

@@ -2,22 +2,13 @@
 // 50 ms per ranking). Deterministic: the same invented library every run.
 import type { DanceFacts, Meter, TrackFacts } from '../src/lib/domain';
 import { rankFits, type TeamVerdict } from '../src/lib/fit/index';
+import { seededRandom } from '../src/lib/random';
 
 const TRACKS = 10_000;
 const RUNS = 40;
 const WARM_UP = 5;
 
-/** mulberry32: a small seeded generator, so the invented library is the same every run. */
-function random(seed: number): () => number {
-	return () => {
-		seed = (seed + 0x6d2b79f5) | 0;
-		let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-	};
-}
-
-const rand = random(20261201);
+const rand = seededRandom(20261201);
 const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
 
 const tracks: TrackFacts[] = Array.from({ length: TRACKS }, (_, i) => {

@@ -7,6 +7,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { applyEnvDefaults, serverArgs } from './env';
+import { seededRandom } from '../src/lib/random';
 
 const TRACKS = 10_000;
 const RUNS = 60;
@@ -20,16 +21,7 @@ const { dances, fits, tracks } = await import('../src/lib/server/db/schema');
 const { listTracks } = await import('../src/lib/server/tracks/list-tracks');
 const { listQuerySchema } = await import('../src/lib/music/track-schemas');
 
-/** mulberry32: a small seeded generator, so the invented library is the same every run. */
-function random(seed: number): () => number {
-	return () => {
-		seed = (seed + 0x6d2b79f5) | 0;
-		let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-	};
-}
-const rand = random(20261202);
+const rand = seededRandom(20261202);
 const WORDS = ['Lantern', 'Gravel', 'Willow', 'Copper', 'Harvest', 'Meadow', 'Cinder', 'Juniper'];
 const word = () => WORDS[Math.floor(rand() * WORDS.length)];
 

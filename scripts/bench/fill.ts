@@ -3,6 +3,7 @@
 import type { Db } from '../../src/lib/server/db';
 import { dances, tracks } from '../../src/lib/server/db/schema';
 import { LEVELS, RHYTHMS } from '../../src/lib/domain';
+import { seededRandom } from '../../src/lib/random';
 
 const SYLLABLES = [
 	'bra',
@@ -19,10 +20,7 @@ const SYLLABLES = [
 	'row'
 ];
 
-function rng(seed: number) {
-	let s = seed >>> 0;
-	return () => (s = (s * 1664525 + 1013904223) >>> 0) / 2 ** 32;
-}
+const rng = seededRandom;
 
 const word = (r: () => number) => {
 	const n = 2 + Math.floor(r() * 2);

@@ -3,7 +3,7 @@
 // 3/4: a strong kick on 1 and lighter "pah" hits on 2 and 3, as a waltz is played
 // (common practice, no source). Swing moves the off-beat eighth from 1/2 towards 2/3 of the beat.
 import type { Meter } from '../domain';
-import type { Random } from './random';
+import type { Random } from '../random';
 
 export type Drum = 'kick' | 'snare' | 'hat';
 

@@ -2,7 +2,7 @@
 import type { Meter } from '../domain';
 import { addPad } from './pad';
 import { drumHits, type Drum } from './pattern';
-import { between, seededRandom } from './random';
+import { between, seededRandom } from '../random';
 import { hat, kick, mixIn, snare, type Voice } from './voices';
 
 export interface SongOptions {

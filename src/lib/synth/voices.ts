@@ -1,7 +1,7 @@
 // Drum voices rendered once per song and mixed in at each hit, which keeps a four-minute song
 // quick to generate. Shapes are the usual synthesis recipes (common practice, no source):
 // a falling sine for the kick, a tone plus noise for the snare, differenced noise for the hat.
-import type { Random } from './random';
+import type { Random } from '../random';
 
 export type Voice = Float32Array;
 

@@ -1,5 +1,6 @@
-// A small seeded generator so the same seed always gives the same song (tests, benchmark, demo).
-// mulberry32: a public-domain 32-bit generator (Tommy Ettinger); quality is ample for noise.
+// The one seeded generator: the same seed always gives the same song, plan or benchmark data.
+// mulberry32, Tommy Ettinger's public-domain 32-bit generator (from memory); ample for noise,
+// shuffles and invented data, not for anything secret.
 
 export type Random = () => number;
 
