@@ -402,3 +402,26 @@ test('the run order can be reordered from the keyboard alone', async ({ page }) 
 		.click();
 	await expect.poll(() => entryNames(page)).toEqual(names);
 });
+
+test('leaving with unsaved changes asks first; staying keeps the edit', async ({ page }) => {
+	const { names, k } = await openRunOrderAtAUniqueEntry(page);
+	const rows = page.getByTestId('entry');
+	await rows.nth(k).getByRole('button', { name: /^Down/ }).click();
+	const moved = [...names];
+	[moved[k], moved[k + 1]] = [moved[k + 1], moved[k]];
+	await expect.poll(() => entryNames(page)).toEqual(moved);
+	// "Stay": the page and the unsaved order are still there.
+	const asked: string[] = [];
+	page.once('dialog', (d) => (asked.push(d.message()), d.dismiss()));
+	await page.getByRole('link', { name: 'All evenings' }).click();
+	await expect
+		.poll(() => asked)
+		.toEqual(['The run order has unsaved changes. Leave without saving them?']);
+	await expect(page).toHaveURL(/\/evenings\/\d+$/);
+	expect(await entryNames(page)).toEqual(moved);
+	await expect(page.getByText('Unsaved changes')).toBeVisible();
+	// "Leave": the navigation goes ahead.
+	page.once('dialog', (d) => d.accept());
+	await page.getByRole('link', { name: 'All evenings' }).click();
+	await expect(page).toHaveURL(/\/evenings$/);
+});
