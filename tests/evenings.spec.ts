@@ -425,3 +425,25 @@ test('leaving with unsaved changes asks first; staying keeps the edit', async ({
 	await page.getByRole('link', { name: 'All evenings' }).click();
 	await expect(page).toHaveURL(/\/evenings$/);
 });
+
+test('undo and redo, by button and by keyboard, walk the edits back and forth', async ({
+	page
+}) => {
+	const { names, k } = await openRunOrderAtAUniqueEntry(page);
+	const rows = page.getByTestId('entry');
+	await rows.nth(k).getByRole('button', { name: /^Down/ }).click();
+	const moved = [...names];
+	[moved[k], moved[k + 1]] = [moved[k + 1], moved[k]];
+	await expect.poll(() => entryNames(page)).toEqual(moved);
+	await page.getByRole('button', { name: 'Undo', exact: true }).click();
+	await expect.poll(() => entryNames(page)).toEqual(names);
+	// Back to the saved order: nothing is left unsaved.
+	await expect(page.getByText('Unsaved changes')).toHaveCount(0);
+	await page.getByRole('button', { name: 'Redo', exact: true }).click();
+	await expect.poll(() => entryNames(page)).toEqual(moved);
+	await page.locator('body').press('Control+z');
+	await expect.poll(() => entryNames(page)).toEqual(names);
+	await page.locator('body').press('Control+Shift+z');
+	await expect.poll(() => entryNames(page)).toEqual(moved);
+	await expect(page.getByText('Unsaved changes')).toBeVisible();
+});

@@ -80,10 +80,26 @@ export const toSave = (e: DraftEntry) => ({
 	reasons: e.reasons
 });
 
+/** How many steps back undo reaches. */
+const MAX_UNDO = 100;
+
+interface Snapshot {
+	entries: DraftEntry[];
+	dirty: boolean;
+}
+
 export class RunOrderDraft {
 	entries = $state<DraftEntry[]>([]);
 	/** True once the person changed something since the last load or save. */
 	dirty = $state(false);
+	/** Earlier states for undo (most recent last) and undone ones for redo; a load or a save
+	 * starts both afresh. */
+	private past = $state<Snapshot[]>([]);
+	private future = $state<Snapshot[]>([]);
+	/** The entry last retyped: a run of typing in one entry is one step to undo. */
+	private typing: string | null = null;
+	canUndo = $derived(this.past.length > 0);
+	canRedo = $derived(this.future.length > 0);
 	private sections: () => SectionStart[];
 	private gapS: () => number;
 	/** Start of every entry in seconds from the evening's start, as a save would compute it. */
@@ -108,13 +124,56 @@ export class RunOrderDraft {
 		this.entries = initial.map(toDraft);
 	}
 
+	private snapshot(): Snapshot {
+		return { entries: $state.snapshot(this.entries) as DraftEntry[], dirty: this.dirty };
+	}
+
+	/** Called before each change, so that undo goes back to the state before it. */
+	private remember(typing: string | null = null) {
+		if (typing === null || typing !== this.typing) {
+			this.past = [...this.past.slice(-(MAX_UNDO - 1)), this.snapshot()];
+		}
+		this.typing = typing;
+		this.future = [];
+	}
+
+	private restore(s: Snapshot) {
+		this.entries = s.entries;
+		this.dirty = s.dirty;
+		this.typing = null;
+	}
+
+	undo() {
+		const before = this.past.at(-1);
+		if (!before) return;
+		this.future = [...this.future, this.snapshot()];
+		this.past = this.past.slice(0, -1);
+		this.restore(before);
+	}
+
+	redo() {
+		const after = this.future.at(-1);
+		if (!after) return;
+		this.past = [...this.past, this.snapshot()];
+		this.future = this.future.slice(0, -1);
+		this.restore(after);
+	}
+
+	/** A new run order: a proposal (`dirty`, and undoable) or what was loaded or saved. */
 	replace(list: EntryData[], dirty: boolean) {
+		if (dirty) this.remember();
+		else {
+			this.past = [];
+			this.future = [];
+			this.typing = null;
+		}
 		this.entries = list.map(toDraft);
 		this.dirty = dirty;
 	}
 
 	/** After a drag: the new order; the moved entry joins its new neighbours' section. */
 	reorder(list: DraftEntry[], movedId?: number) {
+		this.remember();
 		this.entries = list;
 		const at = list.findIndex((e) => e.id === movedId);
 		if (at >= 0) this.settle(at);
@@ -132,6 +191,7 @@ export class RunOrderDraft {
 	move(index: number, by: -1 | 1) {
 		const to = index + by;
 		if (to < 0 || to >= this.entries.length) return;
+		this.remember();
 		const list = [...this.entries];
 		[list[index], list[to]] = [list[to], list[index]];
 		this.entries = list;
@@ -140,6 +200,7 @@ export class RunOrderDraft {
 	}
 
 	insert(at: number, data: EntryData) {
+		this.remember();
 		const list = [...this.entries];
 		const entry = toDraft(data);
 		entry.sectionId = data.sectionId ?? list[at - 1]?.sectionId ?? list[at]?.sectionId ?? null;
@@ -150,11 +211,13 @@ export class RunOrderDraft {
 	}
 
 	remove(index: number) {
+		this.remember();
 		this.entries = this.entries.filter((_, i) => i !== index);
 		this.dirty = true;
 	}
 
 	toggleLock(index: number) {
+		this.remember();
 		const e = this.entries[index];
 		const start = this.startOf(index);
 		e.locked = !e.locked;
@@ -173,6 +236,7 @@ export class RunOrderDraft {
 			rate: number;
 		}
 	) {
+		this.remember();
 		const e = this.entries[index];
 		e.trackId = t.trackId;
 		e.trackTitle = t.title;
@@ -188,12 +252,14 @@ export class RunOrderDraft {
 	setRate(index: number, rate: number) {
 		const e = this.entries[index];
 		if (!(rate >= 0.5 && rate <= 2)) return;
+		this.remember();
 		e.rate = rate;
 		if (e.trackS != null) e.durationS = e.trackS / rate;
 		this.dirty = true;
 	}
 
 	setText(index: number, text: string) {
+		this.remember(`text ${this.entries[index].id}`);
 		this.entries[index].text = text;
 		this.dirty = true;
 	}
