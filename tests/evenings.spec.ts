@@ -403,13 +403,18 @@ test('the run order can be reordered from the keyboard alone', async ({ page }) 
 	await expect.poll(() => entryNames(page)).toEqual(names);
 });
 
-test('leaving with unsaved changes asks first; staying keeps the edit', async ({ page }) => {
+/** Opens the run order and moves one entry down with its button; the order before and after. */
+async function moveOneEntryDown(page: Page) {
 	const { names, k } = await openRunOrderAtAUniqueEntry(page);
-	const rows = page.getByTestId('entry');
-	await rows.nth(k).getByRole('button', { name: /^Down/ }).click();
+	await page.getByTestId('entry').nth(k).getByRole('button', { name: /^Down/ }).click();
 	const moved = [...names];
 	[moved[k], moved[k + 1]] = [moved[k + 1], moved[k]];
 	await expect.poll(() => entryNames(page)).toEqual(moved);
+	return { names, moved };
+}
+
+test('leaving with unsaved changes asks first; staying keeps the edit', async ({ page }) => {
+	const { names, moved } = await moveOneEntryDown(page);
 	// "Stay": the page and the unsaved order are still there.
 	const asked: string[] = [];
 	page.once('dialog', (d) => (asked.push(d.message()), d.dismiss()));
@@ -429,12 +434,7 @@ test('leaving with unsaved changes asks first; staying keeps the edit', async ({
 test('undo and redo, by button and by keyboard, walk the edits back and forth', async ({
 	page
 }) => {
-	const { names, k } = await openRunOrderAtAUniqueEntry(page);
-	const rows = page.getByTestId('entry');
-	await rows.nth(k).getByRole('button', { name: /^Down/ }).click();
-	const moved = [...names];
-	[moved[k], moved[k + 1]] = [moved[k + 1], moved[k]];
-	await expect.poll(() => entryNames(page)).toEqual(moved);
+	const { names, moved } = await moveOneEntryDown(page);
 	await page.getByRole('button', { name: 'Undo', exact: true }).click();
 	await expect.poll(() => entryNames(page)).toEqual(names);
 	// Back to the saved order: nothing is left unsaved.
