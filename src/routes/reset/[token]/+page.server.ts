@@ -12,5 +12,8 @@ export const load = ((event) => {
 }) satisfies PageServerLoad;
 
 export const actions = {
-	default: (event) => setPasswordByLink(event, completeReset, '/signin?reset=1')
+	default: (event) => {
+		publicRoute(event);
+		return setPasswordByLink(event, completeReset, '/signin?reset=1');
+	}
 } satisfies Actions;
