@@ -414,7 +414,7 @@ async function moveOneEntryDown(page: Page) {
 }
 
 test('leaving with unsaved changes asks first; staying keeps the edit', async ({ page }) => {
-	const { names, moved } = await moveOneEntryDown(page);
+	const { moved } = await moveOneEntryDown(page);
 	// "Stay": the page and the unsaved order are still there.
 	const asked: string[] = [];
 	page.once('dialog', (d) => (asked.push(d.message()), d.dismiss()));
