@@ -220,6 +220,9 @@ test('signed out, the public page is served as rendered until the evening change
 	const first = await anon.get(shareUrl);
 	const again = await anon.get(shareUrl);
 	expect(first.status()).toBe(200);
+	// No cookie for a visitor who only reads (one on every answer kept the page out of the cache).
+	expect(first.headers()['set-cookie']).toBeUndefined();
+	expect(again.headers()['set-cookie']).toBeUndefined();
 	expect(await again.text()).toBe(await first.text());
 	// A page served twice carries hashes in its policy, never a one-time nonce.
 	const csp = again.headers()['content-security-policy'];
