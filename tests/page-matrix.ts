@@ -38,20 +38,20 @@ export const PAGES: PageRow[] = [
 	{ route: '/admin/people', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/outbox', path: '/admin/outbox', allowed: ['admin'] },
 	{ route: '/music', path: '/music', allowed: TEAM_READERS },
-	{ route: '/music/[id]', path: '/music/1', allowed: TEAM_READERS },
+	{ route: '/music/[id=id]', path: '/music/1', allowed: TEAM_READERS },
 	{ route: '/dances', path: '/dances', allowed: 'everyone signed in' },
-	{ route: '/dances/[id]', path: '/dances/1', allowed: 'everyone signed in' },
+	{ route: '/dances/[id=id]', path: '/dances/1', allowed: 'everyone signed in' },
 	{ route: '/dances/new', path: '/dances/new', allowed: ['instructor'] },
-	{ route: '/dances/[id]/edit', path: '/dances/1/edit', allowed: ['instructor'] },
+	{ route: '/dances/[id=id]/edit', path: '/dances/1/edit', allowed: ['instructor'] },
 	{ route: '/dances/import', path: '/dances/import', allowed: ['instructor'] },
 	{ route: '/evenings', path: '/evenings', allowed: 'everyone signed in' },
 	// Evening 1 is published (dancers may read it); evening 2 is a draft.
-	{ route: '/evenings/[id]', path: '/evenings/1', allowed: 'everyone signed in' },
-	{ route: '/evenings/[id]', path: '/evenings/2', allowed: TEAM_READERS, denied: 404 },
-	{ route: '/evenings/[id]/desk', path: '/evenings/1/desk', allowed: 'everyone signed in' },
-	{ route: '/evenings/[id]/print', path: '/evenings/1/print', allowed: 'everyone signed in' },
+	{ route: '/evenings/[id=id]', path: '/evenings/1', allowed: 'everyone signed in' },
+	{ route: '/evenings/[id=id]', path: '/evenings/2', allowed: TEAM_READERS, denied: 404 },
+	{ route: '/evenings/[id=id]/desk', path: '/evenings/1/desk', allowed: 'everyone signed in' },
+	{ route: '/evenings/[id=id]/print', path: '/evenings/1/print', allowed: 'everyone signed in' },
 	{ route: '/evenings/new', path: '/evenings/new', allowed: ['organiser'] },
-	{ route: '/evenings/[id]/edit', path: '/evenings/1/edit', allowed: ['organiser'] },
+	{ route: '/evenings/[id=id]/edit', path: '/evenings/1/edit', allowed: ['organiser'] },
 	// A dancer sees only their own requests there (src/lib/server/dances/requests.ts).
 	{ route: '/requests', path: '/requests', allowed: 'everyone signed in' }
 ];
@@ -78,26 +78,31 @@ export const ACTIONS: ActionRow[] = [
 	{ route: '/admin/people', action: 'roles', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'withdraw', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/dances/new', action: 'save', path: '/dances/new', allowed: ['instructor'] },
-	{ route: '/dances/[id]/edit', action: 'save', path: '/dances/1/edit', allowed: ['instructor'] },
 	{
-		route: '/dances/[id]/edit',
+		route: '/dances/[id=id]/edit',
+		action: 'save',
+		path: '/dances/1/edit',
+		allowed: ['instructor']
+	},
+	{
+		route: '/dances/[id=id]/edit',
 		action: 'delete',
 		path: '/dances/999999/edit',
 		allowed: ['instructor']
 	},
-	{ route: '/dances/[id]', action: 'verdict', path: '/dances/1', allowed: ['dj', 'instructor'] },
-	{ route: '/dances/[id]', action: 'request', path: '/dances/1', allowed: ['instructor'] },
+	{ route: '/dances/[id=id]', action: 'verdict', path: '/dances/1', allowed: ['dj', 'instructor'] },
+	{ route: '/dances/[id=id]', action: 'request', path: '/dances/1', allowed: ['instructor'] },
 	{ route: '/dances/import', action: 'preview', path: '/dances/import', allowed: ['instructor'] },
 	{ route: '/dances/import', action: 'import', path: '/dances/import', allowed: ['instructor'] },
 	{ route: '/evenings/new', action: 'default', path: '/evenings/new', allowed: ['organiser'] },
 	{
-		route: '/evenings/[id]/edit',
+		route: '/evenings/[id=id]/edit',
 		action: 'save',
 		path: '/evenings/1/edit',
 		allowed: ['organiser']
 	},
 	{
-		route: '/evenings/[id]/edit',
+		route: '/evenings/[id=id]/edit',
 		action: 'delete',
 		path: '/evenings/999999/edit',
 		allowed: ['organiser']

@@ -1,11 +1,12 @@
 // Route helpers: an evening id from the URL, and refusals as JSON `{ error }` with their status.
 import { error, json } from '@sveltejs/kit';
+import { idParam } from '../../route-id';
 import { EveningError } from './errors';
 
 /** The `[id]` parameter as a positive integer, or a 404. */
 export function eveningIdOf(params: { id?: string }): number {
-	const id = Number(params.id);
-	if (!Number.isSafeInteger(id) || id <= 0 || String(id) !== params.id) {
+	const id = idParam(params.id);
+	if (id === null) {
 		error(404, { message: 'There is no such evening.', error: 'There is no such evening.' });
 	}
 	return id;

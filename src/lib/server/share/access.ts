@@ -2,22 +2,19 @@
 // who is only a dancer just for published evenings. A draft is "not found" to them, so the
 // answer tells nothing about which drafts exist.
 import { error } from '@sveltejs/kit';
-import { z } from 'zod';
+import { idParam } from '../../route-id';
 import { config } from '../config';
 import type { SessionUser } from '../users';
 import { loadSheet } from './load-sheet';
 import type { RunSheet } from './sheet';
 
-export const eveningIdSchema = z.coerce.number().int().positive().max(Number.MAX_SAFE_INTEGER);
 
 export function notFound(message = 'No such evening.'): never {
 	error(404, { message, error: message });
 }
 
 export function eveningId(raw: string): number {
-	const parsed = eveningIdSchema.safeParse(raw);
-	if (!parsed.success || !/^\d+$/.test(raw)) notFound();
-	return parsed.data;
+	return idParam(raw) ?? notFound();
 }
 
 export const isTeam = (user: SessionUser) => user.roles.some((r) => r !== 'dancer');

@@ -7,8 +7,8 @@ import { makeTestDb } from '$lib/server/testing/test-db';
 import { analysisJson, png, tempStorage, text, wav } from '$lib/server/tracks/test-fixtures';
 import { createUser, type SessionUser } from '$lib/server/users';
 import * as list from './+server';
-import * as one from './[id]/+server';
-import * as audio from './[id]/audio/+server';
+import * as one from './[id=id]/+server';
+import * as audio from './[id=id]/audio/+server';
 
 const DJ: SessionUser = { id: 1, email: 'dj@floorset.test', name: 'DJ', roles: ['dj'] };
 const DANCER: SessionUser = { ...DJ, roles: ['dancer'] };

@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
 import { badRequest, readJson } from '$lib/server/json-body';
 import { deleteDance, getDance, updateDance } from '$lib/server/dances/catalogue';
-import { idParam } from '$lib/server/dances/ids';
+import { idParam } from '$lib/route-id';
 import { forgetSheet } from '$lib/server/dances/step-sheet';
 import { dancePatchSchema } from '$lib/schemas/dance';
 import type { RequestHandler } from './$types';

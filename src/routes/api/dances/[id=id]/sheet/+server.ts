@@ -1,7 +1,7 @@
 import { requireRight } from '$lib/server/guard';
 import { badRequest } from '$lib/server/json-body';
 import { danceRow } from '$lib/server/dances/catalogue';
-import { idParam } from '$lib/server/dances/ids';
+import { idParam } from '$lib/route-id';
 import { storage } from '$lib/server/storage';
 import type { RequestHandler } from './$types';
 

@@ -3,21 +3,21 @@ import { requireRight } from '$lib/server/guard';
 import { badRequest, readJson } from '$lib/server/json-body';
 import { deleteTrack, getTrack, updateTrack } from '$lib/server/tracks';
 import { patchSchema } from '$lib/music/track-schemas';
-import { trackId } from './track-id';
+import { idParam } from '$lib/route-id';
 import type { RequestHandler } from './$types';
 
 const notFound = () => badRequest('No such track.', 404);
 
 export const GET = ((event) => {
 	requireRight(event, 'readMusic');
-	const id = trackId(event.params.id);
+	const id = idParam(event.params.id);
 	const track = id === null ? null : getTrack(id);
 	return track ? json({ track }) : notFound();
 }) satisfies RequestHandler;
 
 export const PATCH = (async (event) => {
 	requireRight(event, 'tracks');
-	const id = trackId(event.params.id);
+	const id = idParam(event.params.id);
 	if (id === null) return notFound();
 	const body = await readJson(event.request, patchSchema);
 	if (!body.ok) return body.response;
@@ -33,7 +33,7 @@ export const PATCH = (async (event) => {
 
 export const DELETE = (async (event) => {
 	requireRight(event, 'tracks');
-	const id = trackId(event.params.id);
+	const id = idParam(event.params.id);
 	if (id === null || !(await deleteTrack(id))) return notFound();
 	return new Response(null, { status: 204 });
 }) satisfies RequestHandler;

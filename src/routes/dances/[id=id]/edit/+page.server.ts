@@ -2,7 +2,7 @@ import { error, fail, redirect } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
 import { deleteDance, getDance, updateDance } from '$lib/server/dances/catalogue';
 import { checkDanceForm, sheetFile, valuesOf } from '$lib/server/dances/form';
-import { idParam } from '$lib/server/dances/ids';
+import { idParam } from '$lib/route-id';
 import {
 	attachSheet,
 	checkSheet,

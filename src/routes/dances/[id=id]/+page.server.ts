@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { LEVELS, type Level } from '$lib/domain';
 import { DEFAULT_LESSON_SETTINGS } from '$lib/fit';
 import { holds, requireRight } from '$lib/server/guard';
-import { idParam } from '$lib/server/dances/ids';
+import { idParam } from '$lib/route-id';
 import { openSlowerMusicRequests, requestSlowerMusic } from '$lib/server/dances/requests';
 import { lessonMusic } from '$lib/server/fits/lesson';
 import { fitsForDance } from '$lib/server/fits/ranking';

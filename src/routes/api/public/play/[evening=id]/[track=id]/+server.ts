@@ -10,14 +10,10 @@ import { playableTrack } from '$lib/server/share/play-track';
 import { audioResponse } from '$lib/server/tracks/serve-audio';
 import type { RequestHandler } from './$types';
 
-const id = z
-	.string()
-	.regex(/^[1-9]\d{0,15}$/)
-	.transform(Number)
-	.refine(Number.isSafeInteger);
+// The route's [evening=id] and [track=id] matchers have already checked both ids.
 const linkSchema = z.object({
-	evening: id,
-	track: id,
+	evening: z.coerce.number(),
+	track: z.coerce.number(),
 	expires: z
 		.string()
 		.regex(/^\d{1,12}$/)
