@@ -8,7 +8,6 @@ import type { SessionUser } from '../users';
 import { loadSheet } from './load-sheet';
 import type { RunSheet } from './sheet';
 
-
 export function notFound(message = 'No such evening.'): never {
 	error(404, { message, error: message });
 }
