@@ -2,7 +2,7 @@ import { building } from '$app/environment';
 import { json, type Handle, type ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { handle as authHandle } from './auth';
-import { keepPublicPages } from '$lib/server/cache/public-pages';
+import { cachePublicPages } from '$lib/server/cache/public-pages';
 import { closeDb, db } from '$lib/server/db';
 import { closePlanPool } from '$lib/server/evenings/plan-pool';
 import { isApi } from '$lib/server/guard';
@@ -99,6 +99,6 @@ export const handle = sequence(
 	onlyOurSignIn,
 	authHandle,
 	session,
-	keepPublicPages,
+	cachePublicPages,
 	apiNeedsSession
 );

@@ -2,7 +2,7 @@
 // back with Node's own zlib (gunzip), the reference implementation of RFC 1952.
 import { gunzipSync } from 'node:zlib';
 import { describe, expect, test } from 'vitest';
-import { acceptsGzip, KeptBody } from './kept-body';
+import { acceptsGzip, CachedBody } from './cached-body';
 
 describe('acceptsGzip', () => {
 	test.each([
@@ -22,9 +22,9 @@ describe('acceptsGzip', () => {
 	});
 });
 
-describe('KeptBody', () => {
+describe('CachedBody', () => {
 	const text = JSON.stringify(Array.from({ length: 200 }, (_, i) => ({ id: i, title: 'Reel' })));
-	const kept = new KeptBody(new TextEncoder().encode(text));
+	const kept = new CachedBody(new TextEncoder().encode(text));
 	const ask = (encoding?: string) =>
 		new Request('http://127.0.0.1/x', encoding ? { headers: { 'accept-encoding': encoding } } : {});
 
@@ -51,7 +51,7 @@ describe('KeptBody', () => {
 	});
 
 	test('a small body goes out as it is', async () => {
-		const small = new KeptBody(new TextEncoder().encode('{"ok":true}'));
+		const small = new CachedBody(new TextEncoder().encode('{"ok":true}'));
 		const res = small.respond(ask('gzip'), { headers: {} });
 		expect(res.headers.get('content-encoding')).toBeNull();
 		expect(await res.text()).toBe('{"ok":true}');

@@ -7,7 +7,7 @@ import { gzipSync } from 'node:zlib';
 /** Below this, compressing saves too little to be worth it. */
 const MIN_TO_COMPRESS = 1024;
 
-export class KeptBody {
+export class CachedBody {
 	#gzip: Uint8Array | undefined;
 
 	constructor(readonly bytes: Uint8Array) {}

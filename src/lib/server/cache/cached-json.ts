@@ -3,13 +3,13 @@
 // music table and the same dance's fits; each ranking or page is computed once per change.
 import { db } from '../db';
 import { changeStamp } from './change-stamp';
-import { KeptBody } from './kept-body';
+import { CachedBody } from './cached-body';
 import { StampedCache } from './stamped-cache';
 
 const encoder = new TextEncoder();
 
 /** 32 MB of kept answers at most: a few hundred music-table pages. */
-export const jsonCache = new StampedCache<KeptBody>(32 * 1024 * 1024);
+export const jsonCache = new StampedCache<CachedBody>(32 * 1024 * 1024);
 
 /**
  * A JSON response for `key`, computed by `compute` at most once per database change; null (not
@@ -21,7 +21,7 @@ export function cachedJson(request: Request, key: string, compute: () => unknown
 	if (!body) {
 		const value = compute();
 		if (value == null) return null;
-		body = new KeptBody(encoder.encode(JSON.stringify(value)));
+		body = new CachedBody(encoder.encode(JSON.stringify(value)));
 		jsonCache.set(key, stamp, body);
 	}
 	return body.respond(request, { headers: { 'content-type': 'application/json' } });

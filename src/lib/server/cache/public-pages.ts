@@ -7,26 +7,26 @@
 import type { Handle } from '@sveltejs/kit';
 import { db } from '../db';
 import { changeStamp } from './change-stamp';
-import { KeptBody } from './kept-body';
+import { CachedBody } from './cached-body';
 import { StampedCache } from './stamped-cache';
 
-interface KeptPage {
+interface CachedPage {
 	status: number;
 	headers: [string, string][];
-	body: KeptBody;
+	body: CachedBody;
 }
 
 /** 16 MB: hundreds of evenings' pages. */
-export const publicPages = new StampedCache<KeptPage>(16 * 1024 * 1024, (p) => p.body.byteLength);
+export const publicPages = new StampedCache<CachedPage>(16 * 1024 * 1024, (p) => p.body.byteLength);
 
-const rendering = new Map<string, Promise<KeptPage | null>>();
+const rendering = new Map<string, Promise<CachedPage | null>>();
 
 const PUBLIC_PAGE = /^\/e\/[A-Za-z0-9_-]{1,64}(\/poster)?$/;
 
-const replay = (p: KeptPage, request: Request) =>
+const replay = (p: CachedPage, request: Request) =>
 	p.body.respond(request, { status: p.status, headers: p.headers });
 
-export const keepPublicPages: Handle = async ({ event, resolve }) => {
+export const cachePublicPages: Handle = async ({ event, resolve }) => {
 	const cookie = event.request.headers.get('cookie') ?? '';
 	if (
 		event.request.method !== 'GET' ||
@@ -49,9 +49,9 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 		if (page) return replay(page, event.request);
 		return resolve(event);
 	}
-	let settle!: (page: KeptPage | null) => void;
+	let settle!: (page: CachedPage | null) => void;
 	rendering.set(flight, new Promise((r) => (settle = r)));
-	let page: KeptPage | null = null;
+	let page: CachedPage | null = null;
 	try {
 		const response = await resolve(event);
 		if (
@@ -66,7 +66,7 @@ export const keepPublicPages: Handle = async ({ event, resolve }) => {
 			status: response.status,
 			// Length and encoding are set for each reply, by the form it goes out in.
 			headers: [...response.headers].filter(([name]) => name !== 'content-length'),
-			body: new KeptBody(new Uint8Array(await response.arrayBuffer()))
+			body: new CachedBody(new Uint8Array(await response.arrayBuffer()))
 		};
 		publicPages.set(key, stamp, page);
 		return replay(page, event.request);
