@@ -447,3 +447,28 @@ test('undo and redo, by button and by keyboard, walk the edits back and forth', 
 	await expect.poll(() => entryNames(page)).toEqual(moved);
 	await expect(page.getByText('Unsaved changes')).toBeVisible();
 });
+
+test('the tempo and level charts share one time axis; on a phone the time labels stay apart', async ({
+	page
+}) => {
+	await signIn(page, 'organiser');
+	await page.goto('/evenings/1');
+	await hydrated(page);
+	const chart = page.getByRole('figure', { name: 'Tempo and difficulty through the night' });
+	const firstTickX = async (i: number) =>
+		(await chart
+			.locator('svg')
+			.nth(i)
+			.locator('[aria-label="x-axis tick"] path')
+			.first()
+			.boundingBox())!.x;
+	await expect(chart.locator('svg')).toHaveCount(2);
+	// The same moment of the night at the same x in both charts (issue 12, "The chart").
+	expect(Math.abs((await firstTickX(0)) - (await firstTickX(1)))).toBeLessThan(1);
+	await page.setViewportSize({ width: 390, height: 800 });
+	const labels = chart.locator('svg').first().locator('[aria-label="x-axis tick label"] text');
+	await expect.poll(() => labels.count()).toBeLessThanOrEqual(3);
+	const boxes = await Promise.all((await labels.all()).map((l) => l.boundingBox()));
+	const spans = boxes.map((b) => [b!.x, b!.x + b!.width]).sort((a, b) => a[0] - b[0]);
+	for (let i = 1; i < spans.length; i++) expect(spans[i][0]).toBeGreaterThan(spans[i - 1][1]);
+});
