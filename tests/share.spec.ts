@@ -484,3 +484,16 @@ test('the print view shows the run sheet and hides the navigation in print', asy
 	await expect(page.getByRole('navigation', { name: 'Main' })).toBeHidden();
 	await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
 });
+
+test('a signed-in dancer opening a published evening gets the dancers’ page and its request form', async ({
+	page
+}) => {
+	await signIn(page, 'dancer');
+	await page.goto(`/evenings/${EVENING}`);
+	await expect(page).toHaveURL(/\/e\/[A-Za-z0-9_-]+$/);
+	await hydrated(page);
+	await expect(page.getByRole('button', { name: 'Send my request' })).toBeVisible();
+	// Not the team's view: no desk link, no planner reasons.
+	await expect(page.getByRole('link', { name: /desk/i })).toHaveCount(0);
+	await expect(page.getByText('Why this')).toHaveCount(0);
+});
