@@ -2,7 +2,8 @@
 // concurrent connections on the music table's API, the dance fits API, the public evening page
 // and run-order saves (each connection reads the run order and saves it back) — against a database
 // of 10,000 tracks and 800 dances; then the two APIs again at 50 connections with a new question
-// every request, so that nothing kept from an earlier answer helps. Prints requests per second,
+// every request, so that nothing kept from an earlier answer helps; and the public page with a
+// damaged session cookie, printing how much the server's log grew. Prints requests per second,
 // median, 99th-percentile and longest latency, errors, lost saves and the server's memory (peak resident
 // size during each run). Requests accept gzip as browsers do, except the saves' reads, which the
 // benchmark itself parses. The load generator shares the machine's two cores with the server.
@@ -81,16 +82,20 @@ async function hammer(
 	target: string,
 	path: string | ((n: number) => string),
 	connections: number,
-	cookie?: string
+	cookie?: string,
+	note?: () => string
 ) {
 	let n = 0;
+	// A damaged session cookie on a page (not an API call): the page is what a browser would ask.
+	const page = cookie?.endsWith('=x');
 	const result = await autocannon({
 		url: BASE,
 		connections,
 		duration: SECONDS,
 		// As a browser asks: every browser's page loads and fetches accept gzip.
 		headers: {
-			...(cookie ? { cookie, accept: 'application/json' } : { accept: 'text/html' }),
+			...(cookie ? { cookie } : {}),
+			accept: cookie && !page ? 'application/json' : 'text/html',
 			'accept-encoding': 'gzip, deflate, br'
 		},
 		requests: [
@@ -108,7 +113,8 @@ async function hammer(
 		p99: result.latency.p99,
 		max: result.latency.max,
 		errors: result.errors + result.timeouts,
-		non2xx: result.non2xx
+		non2xx: result.non2xx,
+		note: note?.()
 	});
 }
 
@@ -232,6 +238,20 @@ try {
 		);
 		if (share) await measured(() => hammer('GET /e/<token> (public page)', `/e/${share}`, c));
 		await measured(() => saves(c, cookie));
+	}
+	// Anyone can send a damaged session cookie on every request: it must count as signed out and
+	// cost the log one short line a minute, not a stack trace per request (issue 13, finding 1).
+	if (share) {
+		const logBefore = server.log().length;
+		await measured(() =>
+			hammer(
+				'GET /e/<token>, damaged session cookie',
+				`/e/${share}`,
+				50,
+				'authjs.session-token=x',
+				() => `the server's log grew by ${server.log().length - logBefore} bytes`
+			)
+		);
 	}
 	// The same two APIs with nothing kept: every request asks something not asked before, so each
 	// answer is computed (a tempo window in thousandths of a BPM; a dance and a limit).
