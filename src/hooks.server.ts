@@ -13,6 +13,7 @@ import { sessionUser } from '$lib/server/users';
 import { config } from '$lib/server/config';
 import { isCrossSiteWrite } from '$lib/server/same-origin';
 import { startProblems } from '$lib/server/start-check';
+import { sessionCookieNames } from '$lib/server/session-cookie';
 
 export const init: ServerInit = async () => {
 	if (building) return;
@@ -47,15 +48,13 @@ const onlyOurSignIn: Handle = ({ event, resolve }) => {
 	return resolve(event);
 };
 
-const SESSION_COOKIE = /^(__Secure-)?authjs\.session-token(\.\d+)?$/;
-
 /** Who is signed in, as Auth.js reads its cookie (once per request); roles come fresh from the
  * database, and a session issued under an earlier password counts as signed out. */
 const session: Handle = async ({ event, resolve }) => {
 	// Auth.js's session call sets a callback-url cookie on every answer, which would hand each
 	// visitor a cookie and keep the public page out of its cache: ask only when the request
 	// carries a session cookie (Auth.js's default names, split ones included).
-	const hasSession = event.cookies.getAll().some((c) => SESSION_COOKIE.test(c.name));
+	const hasSession = sessionCookieNames(event.cookies).length > 0;
 	const claim = hasSession
 		? ((await event.locals.auth()) as { uid?: unknown; pw?: unknown } | null)
 		: null;

@@ -583,6 +583,21 @@ test('a damaged session cookie: signed out, cleared in the answer, one short log
 	).find((c) => c.startsWith('authjs.session-token='));
 	expect(cleared).toMatch(/^authjs\.session-token=;/);
 	expect(cleared).toMatch(/Max-Age=0|Expires=Thu, 01 Jan 1970/i);
+	// The public page, served from its cache, still deletes the cookie nobody could read.
+	const sqlite = new Database(join(dir, 'floorset.db'), { readonly: true });
+	const token = sqlite
+		.prepare('select share_token from evenings where share_token is not null limit 1')
+		.pluck()
+		.get() as string;
+	sqlite.close();
+	await fetch(`${instance.base}/e/${token}`).then((r) => r.arrayBuffer());
+	const page = await fetch(`${instance.base}/e/${token}`, {
+		headers: { cookie: 'authjs.session-token=x' }
+	});
+	expect(page.status).toBe(200);
+	expect(page.headers.getSetCookie()).toContain(
+		'authjs.session-token=; Path=/; Max-Age=0; HttpOnly; SameSite=Lax'
+	);
 	const logged = instance.log().slice(logBefore).split('\n').filter(Boolean);
 	expect(logged.length, logged.join('\n')).toBeLessThanOrEqual(1);
 	expect(logged.join('').length).toBeLessThan(300);

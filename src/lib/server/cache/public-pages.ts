@@ -6,6 +6,7 @@
 // served twice weakens nothing.
 import type { Handle } from '@sveltejs/kit';
 import { db } from '../db';
+import { clearing, sessionCookieNames } from '../session-cookie';
 import { changeStamp } from './change-stamp';
 import { CachedBody } from './cached-body';
 import { StampedCache } from './stamped-cache';
@@ -26,27 +27,33 @@ const PUBLIC_PAGE = /^\/e\/[A-Za-z0-9_-]{1,64}(\/poster)?$/;
 const replay = (p: CachedPage, request: Request) =>
 	p.body.respond(request, { status: p.status, headers: p.headers });
 
+function withCleared(response: Response, names: string[]): Response {
+	for (const c of clearing(names)) response.headers.append('set-cookie', c);
+	return response;
+}
+
 export const cachePublicPages: Handle = async ({ event, resolve }) => {
-	const cookie = event.request.headers.get('cookie') ?? '';
 	if (
 		event.request.method !== 'GET' ||
 		event.locals.user ||
 		event.url.search ||
-		cookie.includes('authjs.session-token') ||
 		!PUBLIC_PAGE.test(event.url.pathname)
 	) {
 		return resolve(event);
 	}
+	// Signed out with a session cookie: one nobody could read (damaged, forged, or from before a
+	// password change). The kept page is served all the same, and the answer deletes the cookie.
+	const unreadable = sessionCookieNames(event.cookies);
 	const key = event.url.pathname;
 	const stamp = changeStamp(db().$client);
 	const kept = publicPages.get(key, stamp);
-	if (kept) return replay(kept, event.request);
+	if (kept) return withCleared(replay(kept, event.request), unreadable);
 	// When the QR code goes up, a hundred phones ask at once: one renders, the rest wait for it.
 	const flight = `${stamp} ${key}`;
 	const pending = rendering.get(flight);
 	if (pending) {
 		const page = await pending;
-		if (page) return replay(page, event.request);
+		if (page) return withCleared(replay(page, event.request), unreadable);
 		return resolve(event);
 	}
 	let settle!: (page: CachedPage | null) => void;
@@ -54,9 +61,12 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 	let page: CachedPage | null = null;
 	try {
 		const response = await resolve(event);
+		// Auth.js's own cookies (clearing an unreadable session) belong to this answer only; any
+		// other cookie would mean the page is not the same for everyone, so it is not kept.
+		const cookies = response.headers.getSetCookie();
 		if (
 			response.status !== 200 ||
-			response.headers.has('set-cookie') ||
+			!cookies.every((c) => /^(__Secure-)?authjs\./.test(c)) ||
 			!response.headers.get('content-type')?.startsWith('text/html') ||
 			changeStamp(db().$client) !== stamp
 		) {
@@ -65,11 +75,15 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 		page = {
 			status: response.status,
 			// Length and encoding are set for each reply, by the form it goes out in.
-			headers: [...response.headers].filter(([name]) => name !== 'content-length'),
+			headers: [...response.headers].filter(
+				([name]) => name !== 'content-length' && name !== 'set-cookie'
+			),
 			body: new CachedBody(new Uint8Array(await response.arrayBuffer()))
 		};
 		publicPages.set(key, stamp, page);
-		return replay(page, event.request);
+		const answer = replay(page, event.request);
+		for (const c of cookies) answer.headers.append('set-cookie', c);
+		return answer;
 	} finally {
 		rendering.delete(flight);
 		settle(page);
