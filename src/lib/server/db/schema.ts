@@ -11,6 +11,18 @@ import {
 	text,
 	uniqueIndex
 } from 'drizzle-orm/sqlite-core';
+import {
+	CROWD_MIXES,
+	ENTRY_KINDS,
+	LEVELS,
+	ROLES,
+	SECTION_KINDS,
+	TEMPO_SOURCES,
+	VERDICTS
+} from '../../domain';
+
+/** A CHECK list from one of domain.ts's lists (our own constants, never input). */
+const oneOf = (values: readonly string[]) => sql.raw(values.map((v) => `'${v}'`).join(','));
 
 const createdAt = () =>
 	integer('created_at', { mode: 'timestamp_ms' })
@@ -45,12 +57,12 @@ export const userRoles = sqliteTable(
 			.notNull()
 			.references(() => users.id, { onDelete: 'cascade' }),
 		role: text('role', {
-			enum: ['admin', 'organiser', 'dj', 'instructor', 'dancer']
+			enum: ROLES
 		}).notNull()
 	},
 	(t) => [
 		primaryKey({ columns: [t.userId, t.role] }),
-		check('user_roles_role', sql`${t.role} IN ('admin','organiser','dj','instructor','dancer')`)
+		check('user_roles_role', sql`${t.role} IN (${oneOf(ROLES)})`)
 	]
 );
 
@@ -129,9 +141,7 @@ export const tracks = sqliteTable(
 		bpm: real('bpm'),
 		/** What the detector said before resolution. */
 		rawBpm: real('raw_bpm'),
-		bpmSource: text('bpm_source', { enum: ['detected', 'tapped', 'entered', 'tag'] })
-			.notNull()
-			.default('detected'),
+		bpmSource: text('bpm_source', { enum: TEMPO_SOURCES }).notNull().default('detected'),
 		offsetS: real('offset_s').notNull().default(0),
 		confidence: real('confidence'),
 		/** The other metrical level's tempo when the measurement could not tell the two apart
@@ -169,7 +179,7 @@ export const tracks = sqliteTable(
 		check('tracks_phrase', sql`${t.phraseBeats} > 0`),
 		check('tracks_intro', sql`${t.introBeats} >= 0`),
 		check('tracks_size', sql`${t.fileSize} >= 0`),
-		check('tracks_source', sql`${t.bpmSource} IN ('detected','tapped','entered','tag')`),
+		check('tracks_source', sql`${t.bpmSource} IN (${oneOf(TEMPO_SOURCES)})`),
 		index('tracks_bpm_idx').on(t.bpm),
 		index('tracks_title_idx').on(t.title),
 		index('tracks_created_idx').on(t.createdAt),
@@ -188,7 +198,7 @@ export const dances = sqliteTable(
 		counts: integer('counts').notNull(),
 		walls: integer('walls').notNull(),
 		level: text('level', {
-			enum: ['absolute-beginner', 'beginner', 'improver', 'intermediate', 'advanced']
+			enum: LEVELS
 		}).notNull(),
 		rhythm: text('rhythm').notNull().default('other'),
 		meter: integer('meter').notNull().default(4),
@@ -223,10 +233,7 @@ export const dances = sqliteTable(
 		check('dances_walls', sql`${t.walls} IN (1, 2, 4)`),
 		check('dances_meter', sql`${t.meter} IN (3, 4)`),
 		check('dances_tempo', sql`${t.bpmMin} > 0 AND ${t.bpmMin} < ${t.bpmMax}`),
-		check(
-			'dances_level',
-			sql`${t.level} IN ('absolute-beginner','beginner','improver','intermediate','advanced')`
-		),
+		check('dances_level', sql`${t.level} IN (${oneOf(LEVELS)})`),
 		check('dances_turn', sql`${t.turn} IS NULL OR ${t.turn} IN ('left','right')`),
 		index('dances_name_idx').on(t.name)
 	]
@@ -241,7 +248,7 @@ export const fits = sqliteTable(
 		danceId: integer('dance_id')
 			.notNull()
 			.references(() => dances.id, { onDelete: 'cascade' }),
-		verdict: text('verdict', { enum: ['fits', 'fits-at-rate', 'does-not-fit'] }).notNull(),
+		verdict: text('verdict', { enum: VERDICTS }).notNull(),
 		/** Playback rate the team chose (1 = as recorded). */
 		rate: real('rate').notNull().default(1),
 		/** Rate that suits a lesson of this dance to this track, if the team set one. */
@@ -252,7 +259,7 @@ export const fits = sqliteTable(
 	},
 	(t) => [
 		primaryKey({ columns: [t.trackId, t.danceId] }),
-		check('fits_verdict', sql`${t.verdict} IN ('fits','fits-at-rate','does-not-fit')`),
+		check('fits_verdict', sql`${t.verdict} IN (${oneOf(VERDICTS)})`),
 		check('fits_rate', sql`${t.rate} > 0.25 AND ${t.rate} < 4`),
 		index('fits_dance_idx').on(t.danceId)
 	]
@@ -266,9 +273,7 @@ export const evenings = sqliteTable(
 		venue: text('venue').notNull().default(''),
 		startsAt: integer('starts_at', { mode: 'timestamp_ms' }).notNull(),
 		endsAt: integer('ends_at', { mode: 'timestamp_ms' }).notNull(),
-		crowd: text('crowd', { enum: ['mostly-beginners', 'mixed', 'experienced'] })
-			.notNull()
-			.default('mixed'),
+		crowd: text('crowd', { enum: CROWD_MIXES }).notNull().default('mixed'),
 		notes: text('notes').notNull().default(''),
 		status: text('status', { enum: ['draft', 'published'] })
 			.notNull()
@@ -290,7 +295,7 @@ export const evenings = sqliteTable(
 	(t) => [
 		check('evenings_times', sql`${t.endsAt} > ${t.startsAt}`),
 		check('evenings_status', sql`${t.status} IN ('draft','published')`),
-		check('evenings_crowd', sql`${t.crowd} IN ('mostly-beginners','mixed','experienced')`),
+		check('evenings_crowd', sql`${t.crowd} IN (${oneOf(CROWD_MIXES)})`),
 		index('evenings_starts_idx').on(t.startsAt)
 	]
 );
@@ -304,7 +309,7 @@ export const sections = sqliteTable(
 			.references(() => evenings.id, { onDelete: 'cascade' }),
 		position: integer('position').notNull(),
 		kind: text('kind', {
-			enum: ['lesson', 'open-floor', 'request-block', 'break', 'last-dance']
+			enum: SECTION_KINDS
 		}).notNull(),
 		title: text('title').notNull().default(''),
 		startsAt: integer('starts_at', { mode: 'timestamp_ms' }).notNull(),
@@ -316,10 +321,7 @@ export const sections = sqliteTable(
 	},
 	(t) => [
 		check('sections_times', sql`${t.endsAt} > ${t.startsAt}`),
-		check(
-			'sections_kind',
-			sql`${t.kind} IN ('lesson','open-floor','request-block','break','last-dance')`
-		),
+		check('sections_kind', sql`${t.kind} IN (${oneOf(SECTION_KINDS)})`),
 		uniqueIndex('sections_evening_position').on(t.eveningId, t.position)
 	]
 );
@@ -333,7 +335,7 @@ export const runOrderEntries = sqliteTable(
 			.references(() => evenings.id, { onDelete: 'cascade' }),
 		position: integer('position').notNull(),
 		kind: text('kind', {
-			enum: ['dance', 'teach', 'walkthrough', 'break', 'announcement']
+			enum: ENTRY_KINDS
 		}).notNull(),
 		sectionId: integer('section_id').references(() => sections.id, { onDelete: 'set null' }),
 		danceId: integer('dance_id').references(() => dances.id, { onDelete: 'set null' }),
@@ -348,7 +350,7 @@ export const runOrderEntries = sqliteTable(
 		reasons: text('reasons', { mode: 'json' }).$type<string[]>().notNull().default([])
 	},
 	(t) => [
-		check('entries_kind', sql`${t.kind} IN ('dance','teach','walkthrough','break','announcement')`),
+		check('entries_kind', sql`${t.kind} IN (${oneOf(ENTRY_KINDS)})`),
 		check('entries_rate', sql`${t.rate} > 0.25 AND ${t.rate} < 4`),
 		check('entries_duration', sql`${t.durationS} >= 0`),
 		uniqueIndex('entries_evening_position').on(t.eveningId, t.position)
