@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fitTrackToDance } from './fit-score';
-import { dance, track } from './test-helpers';
+import { dance, track } from '../testing/fit-facts';
 
 // Song of exactly 8 repetitions of 32 counts at 120 BPM (8 × 16 s).
 const clean = track({ bpm: 120, durationS: 128 });

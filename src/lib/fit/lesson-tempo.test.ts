@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { lessonRate, lessonTarget, lessonTracks } from './lesson-tempo';
-import { dance, track } from './test-helpers';
+import { dance, track } from '../testing/fit-facts';
 
 // A dance whose range starts at 120 BPM, so the level slowdowns read as plain percentages.
 const d = dance({ bpmMin: 120, bpmMax: 128 });

@@ -12,7 +12,7 @@ import {
 	songEnd,
 	wallOfRepetition
 } from './phrasing';
-import { dance, track } from './test-helpers';
+import { dance, track } from '../testing/fit-facts';
 
 const tag = (repetition: number, afterCount: number, lengthCounts: number): PhraseEvent => ({
 	kind: 'tag',

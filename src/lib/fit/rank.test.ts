@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { TeamVerdict } from './fit-score';
 import { fitTrackToDance } from './fit-score';
 import { rankDancesForTrack, rankFits } from './rank';
-import { dance, track } from './test-helpers';
+import { dance, track } from '../testing/fit-facts';
 
 const d = dance({ id: 7 });
 // Invented tracks: a perfect fit, one needing a rate change, one too fast, one unmeasured.

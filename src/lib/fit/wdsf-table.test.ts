@@ -7,7 +7,7 @@ import { fitTrackToDance } from './fit-score';
 import { rankDancesForTrack } from './rank';
 import { RHYTHM_PRESETS, rhythmsAt } from '../tempo/rhythm-presets';
 import { fitTempo } from './tempo-fit';
-import { dance, track } from './test-helpers';
+import { dance, track } from '../testing/fit-facts';
 
 interface TableRow {
 	name: string;

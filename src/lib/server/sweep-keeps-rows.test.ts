@@ -12,7 +12,7 @@ import { audioUrl, buildM3u8 } from './share/m3u8';
 import { loadSheet } from './share/load-sheet';
 import { sweepOrphans } from './sweep';
 import { makeTestDb } from './testing/test-db';
-import { analysisJson, tempStorage, wav } from './tracks/test-fixtures';
+import { analysisJson, tempStorage, wav } from './testing/tracks';
 import { uploadTrack } from './tracks/upload';
 
 let t: ReturnType<typeof makeTestDb>;

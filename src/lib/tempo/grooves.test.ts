@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { accuracy1 } from './accuracy';
 import { analysePcm } from './resolve';
-import { every, renderGroove, type Hit } from './testing/grooves';
+import { every, renderGroove, type Hit } from '../testing/grooves';
 
 const rock: Hit[] = [
 	{ at: 0, sound: 'kick' },

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { danceSchema } from '../../schemas/dance';
 import { makeTestDb } from '../testing/test-db';
 import { createDance, deleteDance, getDance, listDances, updateDance } from './catalogue';
-import { aDance, aUser } from './test-rows';
+import { aDance, aUser } from '../testing/rows';
 
 let t: ReturnType<typeof makeTestDb>;
 beforeEach(() => (t = makeTestDb()));

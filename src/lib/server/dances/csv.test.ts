@@ -7,7 +7,7 @@ import { makeTestDb } from '../testing/test-db';
 import { createDance, listDances } from './catalogue';
 import { checkDanceCsv, CSV_COLUMNS, danceCsv, importDanceCsv } from './csv';
 import type { DanceJson } from './dance-json';
-import { aDance } from './test-rows';
+import { aDance } from '../testing/rows';
 
 let t: ReturnType<typeof makeTestDb>;
 beforeEach(() => (t = makeTestDb()));

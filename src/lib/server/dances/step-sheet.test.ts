@@ -8,7 +8,7 @@ import { diskStorage, useStorage, type Storage } from '../storage';
 import { makeTestDb } from '../testing/test-db';
 import { createDance, deleteDance, getDance } from './catalogue';
 import { attachSheet, checkSheet, detachSheet, forgetSheet, sheetName } from './step-sheet';
-import { aDance } from './test-rows';
+import { aDance } from '../testing/rows';
 
 const pdf = (body = 'invented steps') => new TextEncoder().encode(`%PDF-1.4\n${body}\n%%EOF\n`);
 

@@ -2,7 +2,7 @@
 // verdict upsert.
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { createDance } from '../dances/catalogue';
-import { aDance, aTrack, aUser } from '../dances/test-rows';
+import { aDance, aTrack, aUser } from '../testing/rows';
 import { makeTestDb } from '../testing/test-db';
 import { eq } from 'drizzle-orm';
 import { fits, tracks } from '../db/schema';

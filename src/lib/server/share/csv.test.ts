@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, test } from 'vitest';
 import { buildCsv, csvField, CSV_COLUMNS } from './csv';
-import { SHEET } from './test-sheet';
+import { SHEET } from '../testing/sheet';
 
 // Read back with papaparse, a general-purpose CSV parser (independent of our writer), in the
 // strict RFC 4180 form: comma, double-quote quoting, CRLF records.

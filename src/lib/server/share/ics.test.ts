@@ -1,7 +1,7 @@
 import ICAL from 'ical.js';
 import { describe, expect, test } from 'vitest';
 import { buildIcs, escapeText, foldLine, utcStamp } from './ics';
-import { SHEET } from './test-sheet';
+import { SHEET } from '../testing/sheet';
 
 const NOW = Date.UTC(2026, 10, 30, 12, 34, 56);
 const text = buildIcs(SHEET, { host: 'floorset.example', now: NOW });

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { audioUrl, buildM3u8, type UriOf } from './m3u8';
-import { SHEET } from './test-sheet';
+import { SHEET } from '../testing/sheet';
 
 // Line checks against RFC 8216: §4.3.1.1 the first line is #EXTM3U; §4.3.2.1 #EXTINF:<duration>,
 // <title> applies to the URI on the next line (after any comment); §4.1 a line that starts

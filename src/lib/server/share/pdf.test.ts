@@ -1,7 +1,7 @@
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, test } from 'vitest';
 import { buildPdf } from './pdf';
-import { SHEET } from './test-sheet';
+import { SHEET } from '../testing/sheet';
 
 // The PDF's text extracted with pdfjs-dist (Mozilla's general-purpose PDF reader, ISO 32000).
 async function pdfText(bytes: Buffer): Promise<{ pages: number; text: string }> {

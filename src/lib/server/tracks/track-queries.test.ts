@@ -2,7 +2,7 @@
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { tracks } from '../db/schema';
 import { makeTestDb } from '../testing/test-db';
-import { analysisJson, tempStorage, wav } from './test-fixtures';
+import { analysisJson, tempStorage, wav } from '../testing/tracks';
 import { deleteTrack, getTrack, updateTrack } from './track-queries';
 import { uploadTrack } from './upload';
 

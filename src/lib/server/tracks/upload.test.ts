@@ -6,7 +6,7 @@ import { resetConfig } from '../config';
 import { tracks } from '../db/schema';
 import type { Storage } from '../storage';
 import { makeTestDb } from '../testing/test-db';
-import { analysisJson, mp3, mp3WithXing, png, tempStorage, text, wav } from './test-fixtures';
+import { analysisJson, mp3, mp3WithXing, png, tempStorage, text, wav } from '../testing/tracks';
 import { uploadTrack } from './upload';
 
 let t: ReturnType<typeof makeTestDb>;

@@ -4,7 +4,7 @@
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { resetConfig } from '$lib/server/config';
 import { makeTestDb } from '$lib/server/testing/test-db';
-import { analysisJson, png, tempStorage, text, wav } from '$lib/server/tracks/test-fixtures';
+import { analysisJson, png, tempStorage, text, wav } from '$lib/server/testing/tracks';
 import { createUser, type SessionUser } from '$lib/server/users';
 import * as list from './+server';
 import * as one from './[id=id]/+server';

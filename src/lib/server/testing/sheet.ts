@@ -1,7 +1,7 @@
 // An invented evening for the export tests: names, venue and songs are made up. It carries the
 // awkward cases on purpose: commas, quotes and line breaks in text, a non-ASCII title long enough
 // to fold, a slowed teach track, a break and an announcement.
-import type { RunSheet } from './sheet';
+import type { RunSheet } from '../share/sheet';
 
 const start = Date.UTC(2026, 11, 11, 19, 0, 0); // 19:00 in London: GMT in December
 

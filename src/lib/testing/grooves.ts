@@ -2,8 +2,8 @@
 // positions, so a test states exactly what a drummer or a band would play (rock beat, cha-cha,
 // oom-pah-pah, half-time ballad, shuffle) and the tempo it is played at. Not the demo's song
 // generator: no randomised arrangement, every hit is in the test's own words.
-import { seededRandom } from '../../random';
-import { hat, kick, mixIn, snare } from '../../synth/voices';
+import { seededRandom } from '../random';
+import { hat, kick, mixIn, snare } from '../synth/voices';
 
 export type Sound = 'kick' | 'snare' | 'hat' | 'bass' | 'chord' | 'click';
 
