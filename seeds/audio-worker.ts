@@ -1,5 +1,5 @@
 // One worker process of the demo audio generator: rhythm patterns at the song's tempo.
-import { generateSong } from '../src/lib/synth/index';
+import { generateSong } from '../src/lib/synth/song';
 import { writeId3 } from '../src/lib/synth/id3-node';
 import { KBPS, SAMPLE_RATE, type AudioJob } from './audio';
 import { encodeMp3Fast } from './encode-mp3';
