@@ -27,8 +27,8 @@ const PUBLIC_PAGE = /^\/e\/[A-Za-z0-9_-]{1,64}(\/poster)?$/;
 const replay = (p: CachedPage, request: Request) =>
 	p.body.respond(request, { status: p.status, headers: p.headers });
 
-function withCleared(response: Response, names: string[]): Response {
-	for (const c of clearing(names)) response.headers.append('set-cookie', c);
+function withCookies(response: Response, cookies: string[]): Response {
+	for (const c of cookies) response.headers.append('set-cookie', c);
 	return response;
 }
 
@@ -47,13 +47,13 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 	const key = event.url.pathname;
 	const stamp = changeStamp(db().$client);
 	const kept = publicPages.get(key, stamp);
-	if (kept) return withCleared(replay(kept, event.request), unreadable);
+	if (kept) return withCookies(replay(kept, event.request), clearing(unreadable));
 	// When the QR code goes up, a hundred phones ask at once: one renders, the rest wait for it.
 	const flight = `${stamp} ${key}`;
 	const pending = rendering.get(flight);
 	if (pending) {
 		const page = await pending;
-		if (page) return withCleared(replay(page, event.request), unreadable);
+		if (page) return withCookies(replay(page, event.request), clearing(unreadable));
 		return resolve(event);
 	}
 	let settle!: (page: CachedPage | null) => void;
@@ -81,9 +81,7 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 			body: new CachedBody(new Uint8Array(await response.arrayBuffer()))
 		};
 		publicPages.set(key, stamp, page);
-		const answer = replay(page, event.request);
-		for (const c of cookies) answer.headers.append('set-cookie', c);
-		return answer;
+		return withCookies(replay(page, event.request), cookies);
 	} finally {
 		rendering.delete(flight);
 		settle(page);

@@ -12,19 +12,9 @@ export function eveningIdOf(params: { id?: string }): number {
 	return id;
 }
 
-/** Runs `fn`; an EveningError becomes its JSON answer, anything else is rethrown. */
-export function answer(fn: () => Response): Response {
-	try {
-		return fn();
-	} catch (e) {
-		if (e instanceof EveningError)
-			return json({ error: e.message, ...e.extra }, { status: e.status });
-		throw e;
-	}
-}
-
-/** `answer` for work that waits (a plan made in a worker thread). */
-export async function answerAsync(fn: () => Promise<Response>): Promise<Response> {
+/** Runs `fn` (which may wait, as a plan in a worker does); an EveningError becomes its JSON
+ * answer, anything else is rethrown. */
+export async function answer(fn: () => Response | Promise<Response>): Promise<Response> {
 	try {
 		return await fn();
 	} catch (e) {

@@ -1,5 +1,6 @@
 // E-mailing the run order to the team: chosen people and/or everyone holding chosen roles, one
 // message each (so nobody sees the others' addresses), the CSV and the PDF attached.
+import { minutesSeconds } from '../../format';
 import { inArray, isNotNull } from 'drizzle-orm';
 import { ROLES, type Role } from '../../domain';
 import { db } from '../db';
@@ -12,7 +13,6 @@ import {
 	effectiveBpm,
 	entryTitle,
 	KIND_LABELS,
-	minutesSeconds,
 	rateText,
 	trackLine,
 	wallDate,

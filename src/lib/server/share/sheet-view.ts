@@ -1,11 +1,11 @@
 // The run sheet with every figure written out as the PDF writes it, for the print page.
+import { minutesSeconds } from '../../format';
 import { CARE_NOTE, SOUND_CAUTION } from './cautions';
 import {
 	CROWD_LABELS,
 	effectiveBpm,
 	entryTitle,
 	KIND_LABELS,
-	minutesSeconds,
 	rateText,
 	SECTION_LABELS,
 	trackLine,

@@ -130,7 +130,5 @@ export function wallDate(ms: number, timeZone: string): string {
 	return `${get('weekday')} ${get('day')} ${get('month')} ${get('year')}`;
 }
 
-export { minutesSeconds } from '../../format';
-
 /** "0.90" for a rate, always two decimals so columns line up. */
 export const rateText = (rate: number) => rate.toFixed(2);

@@ -2,7 +2,8 @@
 // browser show the same words whatever zone the visitor's device is in.
 import { LEVEL_LABELS } from '$lib/domain';
 import type { PublicEvening } from '$lib/server/share/public-evening';
-import { minutesSeconds, SECTION_LABELS, wallDate, wallTime } from '$lib/server/share/sheet';
+import { minutesSeconds } from '$lib/format';
+import { SECTION_LABELS, wallDate, wallTime } from '$lib/server/share/sheet';
 
 export function publicView(e: PublicEvening) {
 	const at = (ms: number) => wallTime(ms, e.timeZone);

@@ -5,7 +5,7 @@ import { readJson } from '$lib/server/json-body';
 import { describeEntries } from '$lib/server/evenings/describe';
 import { planInputFor } from '$lib/server/evenings/plan';
 import { planOffThread } from '$lib/server/evenings/plan-pool';
-import { answerAsync, eveningIdOf } from '$lib/server/evenings/respond';
+import { answer, eveningIdOf } from '$lib/server/evenings/respond';
 import { planEvening, type PlanInput } from '$lib/planner';
 import { planRequest } from '$lib/schemas/evening';
 import type { RequestHandler } from './$types';
@@ -25,7 +25,7 @@ export const POST = (async (event) => {
 	const body = await readJson(event.request, planRequest);
 	if (!body.ok) return body.response;
 	const { seed, entries } = body.data;
-	return answerAsync(async () => {
+	return answer(async () => {
 		const input = planInputFor(id, seed, entries ? { entries } : undefined);
 		const result = await planOffThread(id, input, dev ? null : import.meta.url);
 		return json({ ...result, entries: describeEntries(result.entries) });
