@@ -111,6 +111,14 @@ export const MATRIX: MatrixRow[] = [
 		status: 200,
 		allowed: 'everyone signed in'
 	})),
+	// The evening kit holds the club's audio: organisers and DJs only.
+	{
+		method: 'GET',
+		route: '/api/evenings/[id=id]/kit.zip',
+		path: '/api/evenings/1/kit.zip',
+		status: 200,
+		allowed: ['organiser', 'dj']
+	},
 	{
 		method: 'GET',
 		route: '/api/evenings/[id=id]/email',

@@ -2,10 +2,13 @@
 // 404, the public page signed out (QR, nothing private), a dancer's request reaching the team,
 // and the run order e-mailed with its two attachments into the captured outbox.
 import { createHmac, hkdfSync } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
 import { expect, request as newRequest, test, type APIRequestContext } from '@playwright/test';
 import ICAL from 'ical.js';
 import jsQR from 'jsqr';
+import { parseBuffer } from 'music-metadata';
 import Papa from 'papaparse';
+import yauzl from 'yauzl';
 import { BASE, signIn, signInApi, hydrated } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
@@ -154,6 +157,83 @@ test('a dancer may export a published evening but not a draft', async () => {
 	expect((await dancer.get(`/evenings/${EVENING}/print`)).status()).toBe(200);
 	expect((await dancer.get(`/evenings/${own}/print`)).status()).toBe(404);
 	await dancer.dispose();
+});
+
+/** Every file of a zip, read with yauzl (an independent reader of PKWARE's APPNOTE format). */
+function unzip(bytes: Buffer): Promise<Map<string, Buffer>> {
+	return new Promise((resolve, reject) => {
+		yauzl.fromBuffer(bytes, { lazyEntries: true }, (err, zip) => {
+			if (err) return reject(err);
+			const files = new Map<string, Buffer>();
+			zip.on('entry', (entry: yauzl.Entry) =>
+				zip.openReadStream(entry, (e, stream) => {
+					if (e) return reject(e);
+					const parts: Buffer[] = [];
+					stream.on('data', (c: Buffer) => parts.push(c));
+					stream.on('end', () => {
+						files.set(entry.fileName, Buffer.concat(parts));
+						zip.readEntry();
+					});
+				})
+			);
+			zip.on('end', () => resolve(files));
+			zip.on('error', reject);
+			zip.readEntry();
+		});
+	});
+}
+
+test('the DJ downloads a draft evening kit in the browser; every file in it reads back', async ({
+	page
+}) => {
+	const entries = (await (await organiser.get(`/api/evenings/${own}/run-order`)).json())
+		.entries as { kind: string; trackId: number | null }[];
+	const dances = entries.filter((e) => e.kind === 'dance' && e.trackId !== null);
+	expect(dances.length).toBeGreaterThan(3);
+
+	await signIn(page, 'dj');
+	await page.goto(`/evenings/${own}`);
+	await hydrated(page);
+	const [download] = await Promise.all([
+		page.waitForEvent('download'),
+		page.getByRole('link', { name: 'Evening kit (zip)' }).click()
+	]);
+	expect(download.suggestedFilename()).toBe(`evening-${own}-kit.zip`);
+	const files = await unzip(await readFile(await download.path()));
+
+	const papers = ['run-order.m3u8', 'run-order.csv', 'run-sheet.pdf', 'read-me.txt'];
+	for (const name of papers) expect(files.has(name), name).toBe(true);
+	const audio = [...files.keys()].filter((n) => !papers.includes(n));
+	// One file per dance with a track, numbered in playing order: "NN - Title - Artist.ext".
+	expect(audio).toHaveLength(dances.length);
+	audio.forEach((name, i) =>
+		expect(name).toMatch(
+			new RegExp(`^${String(i + 1).padStart(2, '0')} - .+\\.(mp3|ogg|wav|flac|m4a)$`)
+		)
+	);
+	// music-metadata, an independent parser, reads every audio file as a playable stream.
+	for (const name of audio) {
+		const { format } = await parseBuffer(files.get(name)!);
+		expect(format.duration ?? 0, name).toBeGreaterThan(1);
+	}
+	// RFC 8216: every URI line is a relative name of a file in the kit, in the same order.
+	const m3u = files.get('run-order.m3u8')!.toString('utf8').split('\n').filter(Boolean);
+	expect(m3u[0]).toBe('#EXTM3U');
+	expect(m3u.filter((l) => !l.startsWith('#'))).toEqual(audio);
+	const rows = Papa.parse<string[]>(files.get('run-order.csv')!.toString('utf8'), {
+		newline: '\r\n'
+	}).data.filter((r) => r.length > 1);
+	expect(rows).toHaveLength(entries.length + 1);
+	expect(files.get('run-sheet.pdf')!.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+
+	// The people who play the night only: a dancer may not take the audio, published or not.
+	const dancer = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(dancer, 'dancer');
+	expect((await dancer.get(`/api/evenings/${EVENING}/kit.zip`)).status()).toBe(403);
+	await dancer.dispose();
+	// The declared length is the length sent, so a browser shows real progress.
+	const direct = await organiser.get(`/api/evenings/${own}/kit.zip`);
+	expect(Number(direct.headers()['content-length'])).toBe((await direct.body()).length);
 });
 
 test('exports download as attachments and read back with independent parsers', async () => {

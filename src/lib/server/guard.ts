@@ -14,6 +14,7 @@ export const RIGHTS = {
 	readDances: ['dj', 'instructor', 'organiser', 'dancer'],
 	evenings: ['organiser'],
 	readEvenings: ['organiser', 'dj', 'instructor', 'dancer'],
+	playNight: ['organiser', 'dj'],
 	requests: ['organiser', 'dj', 'instructor', 'dancer']
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -1,6 +1,6 @@
 import { error, redirect } from '@sveltejs/kit';
 import { config } from '$lib/server/config';
-import { requireRight } from '$lib/server/guard';
+import { holds, requireRight } from '$lib/server/guard';
 import { isTeam } from '$lib/server/share/access';
 import { shareUrlOf } from '$lib/server/share/load-sheet';
 import { editsEvenings, mayRead } from '$lib/server/evenings/access';
@@ -20,6 +20,7 @@ export const load = ((event) => {
 	return {
 		evening,
 		canEdit,
+		canKit: holds(user, 'playNight'),
 		gapS: gapSeconds(evening.planSettings),
 		shareUrl:
 			evening.published && evening.shareToken
