@@ -12,6 +12,19 @@
 // 77 / 89, 0.9 → 81 / 91, 1.2 → 80 / 93 (meter 95 %), 1.5 → 78 / 92; lift 0.5 at width 1.2
 // → 74 / 87. Width 1.2 keeps a 66 BPM ballad and a 174 BPM waltz on their beat
 // (grooves.test.ts) where 0.9 does not.
+// Together the lift and the curve are one log-Gaussian of the same width peaking
+// lift·ln 2·width² octaves above the centre: at 0.35 and 1.2, near 153 BPM, not 120. The
+// fold's pull towards the slower level is what that offset pays for.
+// Tried on the tuning half (2026-12-04, tune-corpus.ts; 81 / 92 % as shipped) and dropped:
+// more weight above 300 Hz, or a normalised three-band sum (after Klapuri, Eronen & Astola,
+// IEEE TASLP 14(1), 2006, from memory), 77–82 % Accuracy 1, one file up at best with
+// Accuracy 2 and meter down; the fold times the envelope's DFT at the beat (after Peeters,
+// EURASIP JASP 2007, from memory) 62–78 %; salience over the fold's spread instead of its
+// mean ≤ 75 %; a bonus for accented bars ≤ 81 %; a penalty for levels whose beats in a bar
+// of 2 or 3 are unevenly filled ≤ 81 %.
+// On the octave misses, the salience of a track's ×½, ×1, ×2 and ×4 levels does not tell
+// pieces written at 200 from pieces written at 100 that sound alike: there the written level
+// is a notation choice, and "check by ear" is the answer.
 import type { Fold } from './comb';
 
 export const WEIGHTS = {
