@@ -1,6 +1,7 @@
-// About forty invented dances. Names are made up from invented places and words; tempo ranges
-// follow the rhythm presets (see src/lib/tempo/rhythm-presets.ts for their sources).
-import type { Level, Meter, PhraseEvent, Rhythm } from '../src/lib/domain';
+// About forty invented dances: line dances, with some partner and circle dances as a country night
+// mixes them. Names are made up from invented places and words; tempo ranges follow the rhythm
+// presets (see src/lib/tempo/rhythm-presets.ts for their sources).
+import type { Formation, Level, Meter, PhraseEvent, Rhythm } from '../src/lib/domain';
 
 export interface DemoDance {
 	name: string;
@@ -12,6 +13,8 @@ export interface DemoDance {
 	bpmMin: number;
 	bpmMax: number;
 	turn?: 'left' | 'right';
+	/** Line unless said: about a quarter of a country night is partner dances. */
+	formation?: Formation;
 	wellKnown?: boolean;
 	events?: PhraseEvent[];
 	notes?: string;
@@ -56,6 +59,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Tansy Lane Two-Step',
+		formation: 'partner',
 		counts: 32,
 		walls: 2,
 		level: 'beginner',
@@ -136,6 +140,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Hollin Ridge Polka',
+		formation: 'partner',
 		counts: 32,
 		walls: 2,
 		level: 'improver',
@@ -169,6 +174,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Dunmarrow Drift',
+		formation: 'partner',
 		counts: 48,
 		walls: 2,
 		level: 'intermediate',
@@ -261,6 +267,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Moth Lantern Waltz',
+		formation: 'partner',
 		counts: 48,
 		walls: 2,
 		level: 'intermediate',
@@ -272,6 +279,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Ashgrove Amble',
+		formation: 'circle',
 		counts: 32,
 		walls: 1,
 		level: 'absolute-beginner',
@@ -316,6 +324,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Sedgewater Slide',
+		formation: 'partner',
 		counts: 32,
 		walls: 2,
 		level: 'improver',
@@ -360,6 +369,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Pennywhistle Promenade',
+		formation: 'circle',
 		counts: 16,
 		walls: 2,
 		level: 'absolute-beginner',
@@ -404,6 +414,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Milldam Sway',
+		formation: 'partner',
 		counts: 32,
 		walls: 2,
 		level: 'beginner',
@@ -460,6 +471,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Hearthstone Hitch',
+		formation: 'partner',
 		counts: 40,
 		walls: 2,
 		level: 'advanced',
@@ -472,6 +484,7 @@ export const DANCES: DemoDance[] = [
 	},
 	{
 		name: 'Willowmere Waltz',
+		formation: 'partner',
 		counts: 48,
 		walls: 1,
 		level: 'advanced',
@@ -493,6 +506,7 @@ export const danceValues = (d: DemoDance) => ({
 	bpmMin: d.bpmMin,
 	bpmMax: d.bpmMax,
 	turn: d.turn ?? null,
+	formation: d.formation ?? 'line',
 	wellKnown: d.wellKnown ?? false,
 	events: d.events ?? [],
 	notes: d.notes ?? ''

@@ -33,6 +33,26 @@ test('an instructor creates a dance with a tag', async ({ page }) => {
 	expect(danceId).toBeGreaterThan(0);
 });
 
+test('formation: a partner dance is set in the form, filtered for and served by the API', async ({
+	page
+}) => {
+	await signIn(page, 'instructor');
+	await page.goto(`/dances/${danceId}/edit`);
+	await hydrated(page);
+	// Line is the default, as most dances are.
+	await expect(page.getByRole('radio', { name: 'Line dance' })).toBeChecked();
+	await page.getByRole('radio', { name: 'Partner dance' }).check();
+	await page.getByRole('button', { name: /save/i }).click();
+	await expect(page.getByRole('heading', { level: 1, name: NAME })).toBeVisible();
+	await page.goto('/dances?formation=partner');
+	await expect(page.getByRole('link', { name: NAME })).toBeVisible();
+	await expect(page.getByLabel('Formation')).toHaveValue('partner');
+	await page.goto('/dances?formation=circle');
+	await expect(page.getByRole('link', { name: NAME })).toHaveCount(0);
+	const api = await page.request.get(`/api/dances/${danceId}`);
+	expect((await api.json()).formation).toBe('partner');
+});
+
 test('the form refuses a range whose slowest is above its fastest', async ({ page }) => {
 	await signIn(page, 'instructor');
 	await page.goto('/dances/new');

@@ -389,6 +389,12 @@ test('the public page, signed out: QR code, run order, nothing private; a reques
 	}, size);
 	expect(jsQR(Uint8ClampedArray.from(pixels), size, size)?.data).toBe(shareUrl);
 	await expect(page.getByRole('heading', { name: 'Run order' })).toBeVisible();
+	// Every partner dance of the saved run order says so, so dancers find a partner in time.
+	const saved = (await (await organiser.get(`/api/evenings/${EVENING}/run-order`)).json())
+		.entries as { kind: string; danceFormation: string | null }[];
+	const partners = saved.filter((e) => e.kind === 'dance' && e.danceFormation === 'partner');
+	expect(partners.length).toBeGreaterThan(0);
+	await expect(page.getByText('· partner dance')).toHaveCount(partners.length);
 	// The lesson's teacher by first name only; no addresses, surnames, notes or requesters.
 	const html = await page.content();
 	expect(html).toContain('Dolores');
@@ -576,4 +582,74 @@ test('a signed-in dancer opening a published evening gets the dancers’ page an
 	// Not the team's view: no desk link, no planner reasons.
 	await expect(page.getByRole('link', { name: /desk/i })).toHaveCount(0);
 	await expect(page.getByText('Why this')).toHaveCount(0);
+});
+
+test('a request answered with a track: the asker and the floor read the answer', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, 'dancer');
+	await page.goto(`/evenings/${EVENING}`);
+	await hydrated(page);
+	await page
+		.getByLabel('Dance', { exact: true })
+		.selectOption({ label: 'Saltmarsh Swing (Improver)' });
+	await page
+		.getByLabel('A note for the DJ (optional)')
+		.fill('For my sister’s birthday (e2e answer)');
+	await page.getByRole('button', { name: 'Send my request' }).click();
+	await expect(page.getByRole('status')).toHaveText(/Your request is with the DJ/);
+
+	const ctx = await browser.newContext({ baseURL: BASE });
+	const dj = await ctx.newPage();
+	await signIn(dj, 'dj');
+	await dj.goto('/requests');
+	await hydrated(dj);
+	const waiting = Number(
+		await dj
+			.getByTestId('waiting-requests')
+			.innerText()
+			.then((t) => t.split(/\s/)[0])
+	);
+	expect(waiting).toBeGreaterThan(0);
+	const item = dj
+		.getByTestId('request')
+		.filter({ hasText: 'For my sister’s birthday (e2e answer)' });
+	await item.getByLabel('Answer', { exact: true }).fill('Straight after the break');
+	const track = item.getByLabel('Track');
+	const choice = await track.locator('option').nth(1).innerText();
+	await track.selectOption({ index: 1 });
+	await item.getByRole('button', { name: 'Accept' }).click();
+	await expect(item.getByTestId('request-status')).toHaveText('Accepted');
+	const title = choice.split(' – ')[0];
+	await expect(item.getByTestId('request-answer')).toHaveText(
+		`The team: Straight after the break · to “${title}”`
+	);
+	// One fewer waits: the count in the navigation follows.
+	await dj.reload();
+	await expect(dj.getByTestId('waiting-requests').or(dj.locator('#nothing'))).toHaveCount(
+		waiting > 1 ? 1 : 0
+	);
+	if (waiting > 1)
+		expect(Number((await dj.getByTestId('waiting-requests').innerText()).split(/\s/)[0])).toBe(
+			waiting - 1
+		);
+	await ctx.close();
+
+	// The dancer who asked reads the answer on their own requests page …
+	await page.goto('/requests');
+	await expect(
+		page
+			.getByTestId('request')
+			.filter({ hasText: 'For my sister’s birthday' })
+			.getByTestId('request-answer')
+	).toContainText('Straight after the break');
+	// … and everyone reads it on the evening's page, with no name and no track.
+	const { shareUrl } = await (
+		await organiser.post(`/api/evenings/${EVENING}/publish`, { headers })
+	).json();
+	const floor = await anon.get(shareUrl);
+	const html = await floor.text();
+	expect(html).toContain('Straight after the break');
+	expect(html).not.toContain(title);
 });

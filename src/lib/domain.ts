@@ -44,6 +44,19 @@ export const RHYTHMS = [
 ] as const;
 export type Rhythm = (typeof RHYTHMS)[number];
 
+/**
+ * How dancers stand (trade terms): each alone in lines, with a partner, or in a circle (mixers
+ * included). A country night alternates line dances with partner dances (common practice).
+ */
+export const FORMATIONS = ['line', 'partner', 'circle'] as const;
+export type Formation = (typeof FORMATIONS)[number];
+
+export const FORMATION_LABELS: Record<Formation, string> = {
+	line: 'Line dance',
+	partner: 'Partner dance',
+	circle: 'Circle dance'
+};
+
 export const TEMPO_SOURCES = ['detected', 'tapped', 'entered', 'tag'] as const;
 export type TempoSource = (typeof TEMPO_SOURCES)[number];
 

@@ -3,8 +3,8 @@ import { navFor } from './nav';
 
 // The expected sections follow DESIGN.md's table of roles (what each role does and may change).
 describe('navigation by role', () => {
-	test('a dancer sees the catalogue and evenings, nothing of the team', () => {
-		expect(navFor(['dancer']).map((i) => i.label)).toEqual(['Dances', 'Evenings']);
+	test('a dancer sees the catalogue, evenings and their own requests, nothing of the team', () => {
+		expect(navFor(['dancer']).map((i) => i.label)).toEqual(['Dances', 'Evenings', 'Requests']);
 	});
 	test('a DJ sees music and requests', () => {
 		expect(navFor(['dj']).map((i) => i.label)).toEqual(['Music', 'Dances', 'Evenings', 'Requests']);

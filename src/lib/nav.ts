@@ -11,7 +11,8 @@ export const NAV: NavItem[] = [
 	{ href: '/music', label: 'Music', roles: ['dj', 'instructor', 'organiser'] },
 	{ href: '/dances', label: 'Dances', roles: ['instructor', 'dj', 'organiser', 'dancer'] },
 	{ href: '/evenings', label: 'Evenings', roles: ['organiser', 'dj', 'instructor', 'dancer'] },
-	{ href: '/requests', label: 'Requests', roles: ['organiser', 'dj', 'instructor'] },
+	// A dancer sees their own requests there, with the team's answers.
+	{ href: '/requests', label: 'Requests', roles: ['organiser', 'dj', 'instructor', 'dancer'] },
 	{ href: '/admin/people', label: 'People', roles: ['admin'] },
 	{ href: '/admin/outbox', label: 'Outbox', roles: ['admin'] }
 ];

@@ -1,4 +1,9 @@
+import { canAnswerRequests, waitingRequests } from '$lib/server/dances/requests';
 import type { LayoutServerLoad } from './$types';
 
 // Every page needs to know who is signed in, to draw the navigation; the pages check rights.
-export const load = (({ locals }) => ({ user: locals.user })) satisfies LayoutServerLoad;
+// Those who answer requests see how many wait.
+export const load = (({ locals }) => ({
+	user: locals.user,
+	waitingRequests: canAnswerRequests(locals.user) ? waitingRequests() : 0
+})) satisfies LayoutServerLoad;

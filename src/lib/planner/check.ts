@@ -20,6 +20,7 @@ export interface RunOrderProblem {
 		| 'track-twice'
 		| 'break'
 		| 'advanced-run'
+		| 'partner-twice'
 		| 'lesson'
 		| 'reprise'
 		| 'lock';
@@ -48,18 +49,23 @@ export function checkRunOrder(input: PlanInput, entries: PlanEntry[]): RunOrderP
 	const seenTracks = new Set<Id>();
 	let dancing = 0;
 	let adv = 0;
+	let prevPartner = false;
 	let prevEnd = -Infinity;
 	entries.forEach((e, i) => {
 		const end = e.startS + e.durationS;
 		if (e.startS < prevEnd - EPS)
 			add('overlap', i, `Entry ${i + 1} starts before the one before it ends.`);
-		if (e.startS - prevEnd >= s.breakLengthMin * 60) dancing = 0;
+		if (e.startS - prevEnd >= s.breakLengthMin * 60) {
+			dancing = 0;
+			prevPartner = false;
+		}
 		prevEnd = end;
 		if (end > eveningS + EPS && !e.locked)
 			add('evening-end', i, `Entry ${i + 1} ends after the evening.`);
 		if (e.kind === 'break') {
 			dancing = 0;
 			adv = 0;
+			prevPartner = false;
 			return;
 		}
 		if (e.kind === 'dance' || e.kind === 'walkthrough') {
@@ -70,6 +76,7 @@ export function checkRunOrder(input: PlanInput, entries: PlanEntry[]): RunOrderP
 		if (e.kind !== 'dance' || e.danceId === null) return;
 		const dance = dances.get(e.danceId);
 		const inLesson = e.sectionId !== null && lessonIds.has(e.sectionId);
+		const partner = dance?.formation === 'partner';
 		if (!e.locked) {
 			const fit = e.trackId === null ? undefined : fits.get(`${e.danceId}|${e.trackId}`);
 			if (!fit || !fitIsPlayable(fit, s.fitThreshold))
@@ -90,7 +97,12 @@ export function checkRunOrder(input: PlanInput, entries: PlanEntry[]): RunOrderP
 			lastStart.set(e.danceId, e.startS);
 			adv = dance?.level === 'advanced' ? adv + 1 : 0;
 			if (adv >= 3) add('advanced-run', i, `Three advanced dances in a row at entry ${i + 1}.`);
+			// A rest or a break between them makes two partner dances two separate turns.
+			if (partner && prevPartner && !s.partnerBackToBack && !e.locked)
+				add('partner-twice', i, `Entry ${i + 1} is a second partner dance in a row.`);
 		}
+		// A lesson's practice counts too: a partner lesson is not followed by a partner dance.
+		prevPartner = partner;
 		if (e.trackId !== null) {
 			if (seenTracks.has(e.trackId))
 				add('track-twice', i, `Entry ${i + 1} plays a track a second time.`);

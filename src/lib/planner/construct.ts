@@ -13,6 +13,7 @@ import {
 	newWalk,
 	repriseCost,
 	requestCost,
+	lessonPlay,
 	restWalk,
 	type Walk
 } from './costs';
@@ -59,8 +60,7 @@ function walkFixed(problem: Problem, st: State, slot: Slot, lastEnd: number): nu
 		if (it.kind === 'dance' && it.cand && it.cand.dance >= 0) {
 			if (it.lesson) {
 				if (it.cand.track >= 0) st.used.add(it.cand.track);
-				st.w.prev2Rh = '';
-				st.w.prevRh = problem.dances[it.cand.dance].rhythm;
+				lessonPlay(problem, st.w, it.cand);
 			} else record(problem, st, it.cand, t);
 		}
 		t += it.dur;
@@ -93,10 +93,16 @@ function globalGain(
 		const before = st.plays.get(c.dance) ?? [];
 		const after = [...before, start];
 		for (const r of reqs) {
+			// With its block still ahead, a request waits for it: played now, inside the repeat
+			// window, it could not come back at the block's start.
+			const blockStart = r.section >= 0 ? problem.sections[r.section].startS : -Infinity;
+			if (start < blockStart) {
+				if (blockStart - start < problem.settings.repeatWindowMin * 60)
+					cost += wt.requests * r.weight * 0.5;
+				continue;
+			}
 			cost +=
-				wt.requests *
-				r.weight *
-				(requestCost(problem, r.section, after) - requestCost(problem, r.section, before));
+				wt.requests * r.weight * (requestCost(problem, r, after) - requestCost(problem, r, before));
 		}
 	}
 	const frac = start / problem.eveningS;

@@ -1,7 +1,8 @@
 // The parts of the objective that score one entry in its place, shared by the full evaluation
 // and the greedy's look-ahead; and the small penalties for requests and the lesson's reprise.
 import { energyOf as energyOfImport, energyTarget as energyTargetImport } from './crowd';
-import type { Cand, Plan, Problem } from './model';
+import { formationCost, partnerTwice } from './formation';
+import type { Cand, Plan, Problem, RequestInfo } from './model';
 import type { ObjectiveTerms } from './types';
 
 // Local bindings: module namespace getters are measurably slow in the search's inner loop.
@@ -24,6 +25,10 @@ export interface Walk {
 	prevE: number;
 	/** Seconds of dancing since the last rest. */
 	dancing: number;
+	/** The dance before was a partner dance (a rest clears it). */
+	prevPartner: boolean;
+	/** Dances since the last partner dance (kept across rests: the mix spans the night). */
+	sinceCouple: number;
 }
 
 export const newWalk = (): Walk => ({
@@ -34,7 +39,9 @@ export const newWalk = (): Walk => ({
 	sinceAdv: 99,
 	prevEff: 0,
 	prevE: -1,
-	dancing: 0
+	dancing: 0,
+	prevPartner: false,
+	sinceCouple: 0
 });
 
 export function restWalk(w: Walk): void {
@@ -45,6 +52,7 @@ export function restWalk(w: Walk): void {
 	w.prevE = -1;
 	w.prevEff = 0;
 	w.dancing = 0;
+	w.prevPartner = false;
 }
 
 /** First start of social dancing, for "easier early in the evening". */
@@ -84,7 +92,9 @@ export function danceCost(
 		difficulty += Math.max(0, d.rank - 1) * 0.8;
 	}
 	if (d.rank === 4 && w.sinceAdv < 3) difficulty += 1.5;
-	const hard = d.rank === 4 && w.advRun >= 2 ? HARD : 0;
+	let hard = d.rank === 4 && w.advRun >= 2 ? HARD : 0;
+	if (partnerTwice(s, w.prevPartner, d.partner)) hard += HARD;
+	const formation = formationCost(s, problem.havePartner, w.sinceCouple, d.partner);
 	let tempo = 0;
 	const fast = c.eff >= s.fastBpm;
 	if (fast && w.fastRun >= s.maxConsecutiveFast) tempo += 4;
@@ -103,6 +113,7 @@ export function danceCost(
 		into.energy += energy;
 		into.rhythm += rhythm;
 		into.phrasing += phrasing;
+		into.formation += formation;
 		into.hard += hard;
 	}
 	return (
@@ -111,6 +122,7 @@ export function danceCost(
 		wt.energy * energy +
 		wt.rhythm * rhythm +
 		wt.phrasing * phrasing +
+		wt.formation * formation +
 		hard
 	);
 }
@@ -124,17 +136,36 @@ export function advanceDance(problem: Problem, w: Walk, c: Cand): void {
 	w.sinceAdv = d.rank === 4 ? 0 : w.sinceAdv + 1;
 	w.prevEff = c.eff;
 	w.prevE = energyOf(c.eff);
+	w.prevPartner = d.partner;
+	w.sinceCouple = d.partner ? 0 : w.sinceCouple + 1;
 }
 
-/** Penalty for a request by where its dance was played (0 in its block, 1 when missing). */
-export function requestCost(problem: Problem, section: number, starts: number[]): number {
+/** The lesson's practice play counts for what follows: a waltz lesson is not followed by a
+ * waltz, nor a partner lesson by a partner dance. It scores nothing itself. */
+export function lessonPlay(problem: Problem, w: Walk, c: Cand): void {
+	const d = problem.dances[c.dance];
+	w.prev2Rh = '';
+	w.prevRh = d.rhythm;
+	w.prevPartner = d.partner;
+}
+
+/** What coming last in its block costs an accepted request, as a share of a missed request's
+ * cost: enough to order the block. Outside the block it costs this much more again, so the
+ * block stays the better place. Chosen, not measured. */
+const FIRST_IN_BLOCK = 0.5;
+
+/** Penalty for a request by where its dance was played (0 in its block, 1 when missing); an
+ * accepted request costs a little more the later it comes in its block. */
+export function requestCost(problem: Problem, r: RequestInfo, starts: number[]): number {
 	if (starts.length === 0) return 1;
-	if (section < 0) return 0;
-	const sec = problem.sections[section];
+	if (r.section < 0) return 0;
+	const sec = problem.sections[r.section];
 	let best = 1;
 	for (const t of starts) {
 		const dist = t < sec.startS ? sec.startS - t : t >= sec.endS ? t - sec.endS : 0;
-		best = Math.min(best, dist === 0 ? 0 : Math.min(0.8, 0.2 + dist / 3600));
+		const inBlock = r.first ? (FIRST_IN_BLOCK * (t - sec.startS)) / (sec.endS - sec.startS) : 0;
+		const outside = Math.min(0.8, 0.2 + dist / 3600) + (r.first ? FIRST_IN_BLOCK : 0);
+		best = Math.min(best, dist === 0 ? inBlock : Math.min(1, outside));
 	}
 	return best;
 }

@@ -1,6 +1,7 @@
 // Turns the final plan into the public entries, each with the reasons it was chosen, and lists the
 // preferences the plan could not meet, in plain words.
 import { LEVEL_LABELS, LEVELS } from '../domain';
+import { partnerSettingWords } from './formation';
 import { place, type Placed } from './layout';
 import type { Plan, Problem } from './model';
 import { firstDanceStart, isAfterLesson, isEarly } from './costs';
@@ -72,6 +73,12 @@ function danceReasons(problem: Problem, p: Placed, prev: Placed | null, ctx: Ctx
 		prev?.item.cand && prev.item.kind === 'dance' ? problem.dances[prev.item.cand.dance] : null;
 	if (prevD && prevD.rhythm !== d.rhythm)
 		out.push(`a change of rhythm: ${d.rhythm} after ${prevD.rhythm}`);
+	if (d.partner && !p.item.lesson)
+		out.push(
+			s.partnerEvery > 0
+				? `a partner dance, as ${partnerSettingWords(s)} asks`
+				: 'a partner dance: find a partner'
+		);
 	return out;
 }
 

@@ -24,6 +24,8 @@ export interface DanceInfo {
 	rank: number;
 	rhythm: string;
 	wellKnown: boolean;
+	/** A partner (couple) dance: spaced by the formation rule. Circle dances count as line. */
+	partner: boolean;
 	bpmMin: number;
 	bpmMax: number;
 	/** Counts in one repetition of the dance. */
@@ -90,6 +92,8 @@ export interface RequestInfo {
 	/** Target section index, or -1 for anywhere. */
 	section: number;
 	weight: number;
+	/** Accepted by the team: best early in its block. */
+	first: boolean;
 }
 
 export interface MustInfo {
@@ -111,6 +115,8 @@ export interface Problem {
 	sections: SectionInfo[];
 	/** Dances with at least one playable pairing, in catalogue order. */
 	playable: number[];
+	/** Some partner dance can be played: only then is the night's formation mix asked for. */
+	havePartner: boolean;
 	/** Playable dances by level rank. */
 	playableByRank: number[][];
 	/** By dance: requests for it, must-plays naming it, lessons teaching it. */

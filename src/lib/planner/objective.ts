@@ -5,6 +5,7 @@ import {
 	advanceDance as advanceDanceImport,
 	danceCost as danceCostImport,
 	firstDanceStart,
+	lessonPlay,
 	newWalk,
 	repriseCost,
 	requestCost,
@@ -43,6 +44,7 @@ export const zeroTerms = (): ObjectiveTerms => ({
 	reprise: 0,
 	filler: 0,
 	breaks: 0,
+	formation: 0,
 	hard: 0
 });
 
@@ -127,13 +129,14 @@ export function evaluateTotal(problem: Problem, plan: Plan): number {
 
 function resetTerms(t: ObjectiveTerms): ObjectiveTerms {
 	t.difficulty = t.tempo = t.energy = t.rhythm = t.phrasing = t.requests = 0;
-	t.mustPlay = t.lastDance = t.reprise = t.filler = t.breaks = t.hard = 0;
+	t.mustPlay = t.lastDance = t.reprise = t.filler = t.breaks = t.formation = t.hard = 0;
 	return t;
 }
 
 function resetWalk(w: Walk): Walk {
 	restWalk(w);
 	w.sinceAdv = 99;
+	w.sinceCouple = 0;
 	return w;
 }
 
@@ -209,11 +212,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 						hist[problem.dances[d].rank]++;
 					}
 					advanceDance(problem, w, c);
-				} else {
-					// The lesson's play counts for rhythm: a waltz lesson is not followed by a waltz.
-					w.prev2Rh = '';
-					w.prevRh = problem.dances[c.dance].rhythm;
-				}
+				} else lessonPlay(problem, w, c);
 				if (c.track >= 0) {
 					if (sc.trackStamp[c.track] !== gen) {
 						sc.trackStamp[c.track] = gen;
@@ -257,7 +256,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 	}
 	const buf = sc.buf;
 	for (const r of problem.requests) {
-		terms.requests += r.weight * requestCost(problem, r.section, startsOf(sc, r.dance, -1, buf));
+		terms.requests += r.weight * requestCost(problem, r, startsOf(sc, r.dance, -1, buf));
 	}
 	for (const m of problem.must)
 		if (startsOf(sc, m.dance, m.track, buf).length === 0) terms.mustPlay += 1;
@@ -296,6 +295,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 	weighted.reprise = wt.reprise * terms.reprise;
 	weighted.filler = wt.filler * terms.filler;
 	weighted.breaks = wt.breaks * terms.breaks;
+	weighted.formation = wt.formation * terms.formation;
 	weighted.hard = terms.hard;
 
 	const total =
@@ -310,6 +310,7 @@ export function evaluate(problem: Problem, plan: Plan, reuse = false): Evaluatio
 		weighted.reprise +
 		weighted.filler +
 		weighted.breaks +
+		weighted.formation +
 		weighted.hard;
 	return { total, terms: weighted, hardCount };
 }

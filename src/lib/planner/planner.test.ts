@@ -79,17 +79,21 @@ describe('worked examples of the timing (plain arithmetic)', () => {
 		const plan = planEvening(input);
 		expect(plan.violations).toEqual([]);
 		const [teach, walk, slow] = plan.entries;
-		// 204 s ÷ 0.85 = 240 s; the teach fills the rest: 2700 − 240 − 180 − 2 × 15 = 2250 s.
+		// 204 s ÷ 0.85 = 240 s. The lesson ends one 15 s changeover before the open floor, as a
+		// saved run order lays it out, and the teach fills the rest:
+		// 2700 − 15 − 240 − 180 − 2 × 15 = 2235 s.
 		expect(slow).toMatchObject({
 			kind: 'dance',
 			danceId: 1,
 			trackId: 11,
 			rate: 0.85,
-			startS: 2460
+			startS: 2445
 		});
 		expect(slow.durationS).toBeCloseTo(240, 9);
-		expect(walk).toMatchObject({ kind: 'walkthrough', danceId: 1, startS: 2265, durationS: 180 });
-		expect(teach).toMatchObject({ kind: 'teach', danceId: 1, startS: 0, durationS: 2250 });
+		expect(walk).toMatchObject({ kind: 'walkthrough', danceId: 1, startS: 2250, durationS: 180 });
+		expect(teach).toMatchObject({ kind: 'teach', danceId: 1, startS: 0, durationS: 2235 });
+		// The open floor's first entry starts at its section's start, after the changeover.
+		expect(plan.entries[3].startS).toBe(2700);
 		expect(slow.reasons).toContain('taught in the lesson at 0.85×');
 		// And again later at full tempo, to the other track (no track twice).
 		const again = plan.entries.filter((e) => e.danceId === 1 && e.startS >= 2700);

@@ -107,6 +107,7 @@ export function prepare(
 			rank: levelRank(d.level),
 			rhythm: d.rhythm,
 			wellKnown: d.wellKnown === true,
+			partner: d.formation === 'partner',
 			bpmMin: d.bpmMin,
 			bpmMax: d.bpmMax,
 			counts: d.counts,
@@ -163,7 +164,12 @@ export function prepare(
 			continue;
 		}
 		const sec = r.sectionId === undefined ? -1 : sections.findIndex((s) => s.id === r.sectionId);
-		requests.push({ dance: d, section: sec >= 0 ? sec : firstBlock, weight: r.weight ?? 1 });
+		requests.push({
+			dance: d,
+			section: sec >= 0 ? sec : firstBlock,
+			weight: r.weight ?? 1,
+			first: r.first === true
+		});
 	}
 	const must: MustInfo[] = [];
 	for (const m of input.mustPlay ?? []) {
@@ -200,6 +206,7 @@ export function prepare(
 		tracks,
 		sections,
 		playable,
+		havePartner: playable.some((i) => dances[i].partner),
 		requests,
 		must,
 		lessons,

@@ -4,6 +4,7 @@ import { musicEnd, trailingBreak } from './breaks';
 import { place, slotEnd } from './layout';
 import type { Plan, Problem } from './model';
 import { isLessonTempo } from './prepare';
+import { partnerTwice } from './formation';
 import { restLimitS, restSettingWords } from './settings';
 import { minutesWords } from './time';
 
@@ -19,9 +20,13 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 	let dancing = 0;
 	let advRun = 0;
 	let lastEnd = 0;
+	let prevPartner = false;
 	placed.forEach(({ item, start }, pos) => {
 		const end = start + item.dur;
-		if (start - lastEnd >= s.breakLengthMin * 60) dancing = 0;
+		if (start - lastEnd >= s.breakLengthMin * 60) {
+			dancing = 0;
+			prevPartner = false;
+		}
 		lastEnd = end;
 		if (end > problem.eveningS + EPS && !item.locked) {
 			out.push(`Entry ${pos + 1} ends after the evening's end.`);
@@ -29,6 +34,7 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 		if (item.kind === 'break') {
 			dancing = 0;
 			advRun = 0;
+			prevPartner = false;
 			return;
 		}
 		if (item.kind === 'dance' || item.kind === 'walkthrough') {
@@ -49,7 +55,10 @@ export function checkHardRules(problem: Problem, plan: Plan): string[] {
 			lastStart.set(c.dance, start);
 			advRun = problem.dances[c.dance].rank === 4 ? advRun + 1 : 0;
 			if (advRun === 3) out.push(`Three advanced dances in a row end at entry ${pos + 1}.`);
+			if (!item.locked && partnerTwice(s, prevPartner, problem.dances[c.dance].partner))
+				out.push(`Entry ${pos + 1} is a second partner dance in a row.`);
 		}
+		prevPartner = problem.dances[c.dance].partner;
 		if (c.track >= 0) {
 			if (trackSeen.has(c.track))
 				out.push(`The track "${problem.tracks[c.track].title}" is played twice.`);

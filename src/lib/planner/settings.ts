@@ -13,7 +13,8 @@ export const DEFAULT_WEIGHTS: PlanWeights = {
 	lastDance: 2,
 	reprise: 1,
 	filler: 1,
-	breaks: 1
+	breaks: 1,
+	formation: 1
 };
 
 export const DEFAULT_SETTINGS: PlanSettings = {
@@ -25,6 +26,10 @@ export const DEFAULT_SETTINGS: PlanSettings = {
 	// "a rest after every N minutes of dancing" (issue 12: nobody asked for the extra breaks).
 	breakEveryMin: 0,
 	breakLengthMin: 10,
+	// A partner dance after every three line dances, never two partner dances running: a
+	// country night's usual mix (common practice, no source); both are evening settings.
+	partnerEvery: 3,
+	partnerBackToBack: false,
 	// Never a clip on the floor: a track must hold two whole repetitions of the dance and last
 	// 90 s at least (issue 12's defaults; common practice, no source).
 	minRepetitions: 2,

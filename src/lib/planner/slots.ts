@@ -98,7 +98,9 @@ export function buildSlots(problem: Problem, locks: LockedEntry[]): Slot[] {
 	let li = 0;
 	let lastLockEnd = 0;
 	secs.forEach((sec, si) => {
-		const nextSec = si + 1 < secs.length ? secs[si + 1].startS : problem.eveningS;
+		// The next section's first entry comes after the changeover, as the saved run order lays
+		// it out; the evening's own end needs none.
+		const nextSec = si + 1 < secs.length ? secs[si + 1].startS - gapS : problem.eveningS;
 		// What the section follows: its own start, or a lock from before that runs into it.
 		let before = cursor > sec.startS ? lastLockEnd : sec.startS;
 		cursor = Math.max(cursor, sec.startS);

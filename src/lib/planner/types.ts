@@ -1,6 +1,14 @@
 // The planner's public input and output. Plain data: the routes map database rows to these and
 // the planner never reads the database itself.
-import type { CrowdMix, EntryKind, Level, Rhythm, SectionKind, Verdict } from '../domain';
+import type {
+	CrowdMix,
+	EntryKind,
+	Formation,
+	Level,
+	Rhythm,
+	SectionKind,
+	Verdict
+} from '../domain';
 
 /** Ids are whatever the caller uses (database numbers or strings); compared with ===. */
 export type Id = number | string;
@@ -35,6 +43,8 @@ export interface PlanDance {
 	bpmMax: number;
 	/** Most dancers on the floor know it without a walkthrough. */
 	wellKnown?: boolean;
+	/** Line (the default), partner or circle. */
+	formation?: Formation;
 }
 
 export interface PlanTrack {
@@ -63,6 +73,8 @@ export interface PlanRequest {
 	/** The section it was asked for; without it the first request block, else anywhere. */
 	sectionId?: Id;
 	weight?: number;
+	/** The team accepted it: play it early in its block, before requests still waiting. */
+	first?: boolean;
 }
 
 export interface MustPlay {
@@ -105,6 +117,7 @@ export interface PlanWeights {
 	reprise: number;
 	filler: number;
 	breaks: number;
+	formation: number;
 }
 
 export interface PlanSettings {
@@ -118,6 +131,10 @@ export interface PlanSettings {
 	/** Nor is a track (at its planned rate) shorter than this. */
 	minTrackS: number;
 	breakLengthMin: number;
+	/** "One partner dance after every N line dances"; 0 asks for no balance. */
+	partnerEvery: number;
+	/** Two partner dances may follow each other (never, unless the evening asks). */
+	partnerBackToBack: boolean;
 	maxConsecutiveFast: number;
 	/** Effective tempo (bpm × rate) at or above which an entry counts as fast. */
 	fastBpm: number;
@@ -184,6 +201,7 @@ export interface ObjectiveTerms {
 	reprise: number;
 	filler: number;
 	breaks: number;
+	formation: number;
 	/** Penalty for hard rules broken (0 in a feasible plan). */
 	hard: number;
 }

@@ -1,4 +1,5 @@
 // The preferences a finished plan does not meet, each with its reason in plain words.
+import { partnerSettingWords } from './formation';
 import { place } from './layout';
 import type { Plan, Problem } from './model';
 import { minutesWords } from './time';
@@ -68,6 +69,8 @@ export function unmetPreferences(problem: Problem, plan: Plan): string[] {
 	let fastRun = 0;
 	let advRecent = -99;
 	let prevRh = '';
+	let sinceCouple = 0;
+	let wide = 0;
 	placed.forEach((p, idx) => {
 		const c = p.item.cand;
 		if (p.item.kind === 'break') {
@@ -92,7 +95,18 @@ export function unmetPreferences(problem: Problem, plan: Plan): string[] {
 			advRecent = social.indexOf(p);
 		}
 		prevRh = d.rhythm;
+		sinceCouple = d.partner ? 0 : sinceCouple + 1;
+		// Two line dances past the setting's spacing: the mix has slipped (one over is ordinary).
+		if (sinceCouple === s.partnerEvery + 2) wide++;
 	});
+	if (s.partnerEvery > 0 && problem.dances.some((d) => d.partner)) {
+		if (!problem.havePartner)
+			out.push('No partner dance could be planned: none in the catalogue fits a free track.');
+		else if (wide > 0)
+			out.push(
+				`Partner dances are further apart than ${partnerSettingWords(s)} in ${wide} ${wide === 1 ? 'place' : 'places'}.`
+			);
+	}
 	placed.forEach((p, idx) => {
 		const lock = p.item.lock;
 		if (lock && lock.position !== idx) {

@@ -2,7 +2,7 @@
 // Tags and restarts are sent as two lists; the database keeps them together as `events`.
 import { z } from 'zod';
 import { blockText, lineText } from './text';
-import { LEVELS, RHYTHMS, VERDICTS } from '../domain';
+import { FORMATIONS, LEVELS, RHYTHMS, VERDICTS } from '../domain';
 
 const wholeNumber = (what: string, min: number, max: number) =>
 	z
@@ -43,6 +43,9 @@ export const danceFields = z.object({
 		.enum(['left', 'right'], { message: 'Turn is left, right or none.' })
 		.nullable()
 		.default(null),
+	formation: z
+		.enum(FORMATIONS, { message: 'Formation is line, partner or circle.' })
+		.default('line'),
 	tags: z
 		.array(tagSchema, { message: 'Send tags as a list.' })
 		.max(50, 'At most 50 tags.')
@@ -104,6 +107,7 @@ export const danceFilterSchema = z.object({
 		.number()
 		.pipe(z.union([z.literal(3), z.literal(4)]))
 		.optional(),
+	formation: z.enum(FORMATIONS).optional(),
 	/** A tempo in BPM the dance's range must hold. */
 	tempo: z.coerce.number().positive().lt(400).optional()
 });
@@ -172,6 +176,7 @@ export interface DanceFormValues {
 	bpmMin: string;
 	bpmMax: string;
 	turn: string;
+	formation: string;
 	notes: string;
 	choreographer: string;
 	wellKnown: boolean;
@@ -188,6 +193,7 @@ export const emptyDanceValues = (): DanceFormValues => ({
 	bpmMin: '',
 	bpmMax: '',
 	turn: '',
+	formation: 'line',
 	notes: '',
 	choreographer: '',
 	wellKnown: false,

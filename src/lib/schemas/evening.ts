@@ -39,6 +39,8 @@ export const plannerSettings = z
 		minRepetitions: z.number().min(0).max(20),
 		minTrackS: z.number().min(0).max(1800),
 		breakLengthMin: z.number().min(0).max(60),
+		partnerEvery: z.number().int().min(0).max(12),
+		partnerBackToBack: z.boolean(),
 		maxConsecutiveFast: z.number().int().min(1).max(20),
 		fastBpm: z.number().min(40).max(300),
 		gapS: z.number().min(0).max(600),
@@ -193,6 +195,12 @@ export const eveningForm = z.object({
 			.int('Give whole minutes of dancing between rests.')
 			.min(10, 'A rest after every 10 minutes of dancing at the least.')
 			.max(600, 'A rest after every 600 minutes of dancing at the most.')
-	])
+	]),
+	partnerEvery: z.coerce
+		.number({ message: 'Choose how often a partner dance comes.' })
+		.int('Choose how often a partner dance comes.')
+		.min(0, 'Choose how often a partner dance comes.')
+		.max(12, 'A partner dance after every 12 line dances at the most.'),
+	partnerBackToBack: z.boolean()
 });
 export type EveningFormInput = z.infer<typeof eveningForm>;

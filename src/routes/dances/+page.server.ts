@@ -17,6 +17,7 @@ export const load = ((event) => {
 			level: filter.level ?? '',
 			rhythm: filter.rhythm ?? '',
 			meter: filter.meter ? String(filter.meter) : '',
+			formation: filter.formation ?? '',
 			tempo: filter.tempo ? String(filter.tempo) : ''
 		},
 		filterProblem: parsed.success ? null : 'One of the filters was not understood and is ignored.',

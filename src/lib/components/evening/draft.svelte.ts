@@ -1,6 +1,6 @@
 // The run order being edited in the browser: entries in order, their computed start times, and
 // the edits (move, insert, remove, lock, swap). Saving and planning live in the editor component.
-import type { EntryKind, Level, Rhythm } from '../../domain';
+import type { EntryKind, Formation, Level, Rhythm } from '../../domain';
 import {
 	DEFAULT_DURATION_S,
 	recomputeStarts,
@@ -17,6 +17,7 @@ export interface DraftEntry {
 	danceName: string | null;
 	danceLevel: Level | null;
 	danceRhythm: Rhythm | null;
+	danceFormation: Formation | null;
 	trackId: number | null;
 	trackTitle: string | null;
 	trackArtist: string | null;
@@ -52,6 +53,7 @@ export function toDraft(e: EntryData): DraftEntry {
 		danceName: e.danceName ?? null,
 		danceLevel: e.danceLevel ?? null,
 		danceRhythm: e.danceRhythm ?? null,
+		danceFormation: e.danceFormation ?? null,
 		trackId: e.trackId ?? null,
 		trackTitle: e.trackTitle ?? null,
 		trackArtist: e.trackArtist ?? null,

@@ -29,6 +29,7 @@ export function listDances(filter: DanceFilter = {}): DanceJson[] {
 	if (filter.level) where.push(eq(dances.level, filter.level));
 	if (filter.rhythm) where.push(eq(dances.rhythm, filter.rhythm));
 	if (filter.meter) where.push(eq(dances.meter, filter.meter));
+	if (filter.formation) where.push(eq(dances.formation, filter.formation));
 	if (filter.tempo) where.push(lte(dances.bpmMin, filter.tempo), gte(dances.bpmMax, filter.tempo));
 	return db()
 		.select()
@@ -58,10 +59,10 @@ export function createDance(input: DanceInput, userId: number | null): DanceJson
 
 /** The fields of a stored dance in input shape, to merge a PATCH into. */
 function inputOf(d: DanceJson): DanceInput {
-	const { name, counts, walls, level, rhythm, meter, bpmMin, bpmMax, turn } = d;
+	const { name, counts, walls, level, rhythm, meter, bpmMin, bpmMax, turn, formation } = d;
 	const { tags, restarts, notes, choreographer, wellKnown } = d;
 	return {
-		...{ name, counts, walls, level, rhythm, meter, bpmMin, bpmMax, turn },
+		...{ name, counts, walls, level, rhythm, meter, bpmMin, bpmMax, turn, formation },
 		...{ tags, restarts, notes, choreographer, wellKnown }
 	};
 }

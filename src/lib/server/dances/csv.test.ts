@@ -52,7 +52,14 @@ describe('CSV export', () => {
 			null
 		);
 		createDance(
-			aDance({ name: 'Plain Waltz', rhythm: 'waltz', meter: 3, bpmMin: 84, bpmMax: 96 }),
+			aDance({
+				name: 'Plain Waltz',
+				rhythm: 'waltz',
+				meter: 3,
+				bpmMin: 84,
+				bpmMax: 96,
+				formation: 'partner'
+			}),
 			null
 		);
 		const strip = (d: DanceJson) => ({ ...d, id: 0, version: 0, updatedAt: '' });
@@ -105,6 +112,16 @@ describe('CSV import', () => {
 			restarts: [{ repetition: 6, afterCount: 24 }],
 			wellKnown: true
 		});
+	});
+
+	test('formation: blank or missing is a line dance, a known word is kept, others refused', () => {
+		const old = checkDanceCsv(`${HEADER}\nOld File,32,4,beginner,100,120`);
+		expect(old.rows[0].dance?.formation).toBe('line');
+		const check = checkDanceCsv(
+			`${HEADER},formation\nPair Up,32,1,beginner,100,120,Partner\nRound,32,1,beginner,100,120,\nOdd,32,4,beginner,100,120,square`
+		);
+		expect(check.rows.map((r) => r.dance?.formation)).toEqual(['partner', 'line', undefined]);
+		expect(check.rows[2].errors.join(' ')).toMatch(/^formation: /);
 	});
 
 	test('a malformed tag is that row’s error', () => {

@@ -20,7 +20,8 @@ export const CSV_COLUMNS = [
 	'restarts',
 	'notes',
 	'choreographer',
-	'wellKnown'
+	'wellKnown',
+	'formation'
 ] as const;
 
 export const REQUIRED_COLUMNS = ['name', 'counts', 'walls', 'level', 'bpmMin', 'bpmMax'] as const;
@@ -49,7 +50,8 @@ export function danceCsv(list: readonly DanceJson[]): string {
 		restarts: restartsText(d.restarts),
 		notes: d.notes,
 		choreographer: d.choreographer,
-		wellKnown: d.wellKnown ? 'yes' : 'no'
+		wellKnown: d.wellKnown ? 'yes' : 'no',
+		formation: d.formation
 	}));
 	// escapeFormulae keeps a spreadsheet from running a cell that begins with = + - @ (OWASP,
 	// "CSV Injection"); the import takes the guarding apostrophe off again.
@@ -122,6 +124,8 @@ function checkRecord(record: Record<string, string>, line: number): CsvRow {
 		bpmMin: numberOr(cell('bpmMin')),
 		bpmMax: numberOr(cell('bpmMax')),
 		turn: cell('turn').toLowerCase() || null,
+		// A file from before formations, or a blank cell: a line dance, as most are.
+		formation: cell('formation').toLowerCase() || undefined,
 		tags: tags.items ?? [],
 		restarts: restarts.items ?? [],
 		notes: (record.notes ?? '').replace(/^'(?=[=+\-@\t\r])/, ''),

@@ -1,5 +1,5 @@
 // A dance row as the API and the pages send it, and the other way: form or API fields to columns.
-import type { DanceFacts, PhraseEvent } from '../../domain';
+import type { DanceFacts, Formation, PhraseEvent } from '../../domain';
 import type { DanceInput } from '../../schemas/dance';
 import type { dances } from '../db/schema';
 
@@ -16,6 +16,7 @@ export interface DanceJson {
 	bpmMin: number;
 	bpmMax: number;
 	turn: 'left' | 'right' | null;
+	formation: Formation;
 	tags: { repetition: number; afterCount: number; lengthCounts: number }[];
 	restarts: { repetition: number; afterCount: number }[];
 	notes: string;
@@ -42,6 +43,7 @@ export function danceJson(row: DanceRow): DanceJson {
 		bpmMin: row.bpmMin,
 		bpmMax: row.bpmMax,
 		turn: row.turn ?? null,
+		formation: row.formation,
 		tags: events
 			.filter((e) => e.kind === 'tag')
 			.map(({ repetition, afterCount, lengthCounts }) => ({

@@ -28,6 +28,7 @@ export function formValues(form: FormData): DanceFormValues {
 		bpmMin: text(form, 'bpmMin'),
 		bpmMax: text(form, 'bpmMax'),
 		turn: text(form, 'turn'),
+		formation: text(form, 'formation'),
 		notes: text(form, 'notes'),
 		choreographer: text(form, 'choreographer'),
 		wellKnown: form.get('wellKnown') === 'on',
@@ -61,6 +62,7 @@ export function checkDanceForm(form: FormData): FormCheck {
 		bpmMin: num(values.bpmMin),
 		bpmMax: num(values.bpmMax),
 		turn: values.turn === '' ? null : values.turn,
+		formation: values.formation || undefined,
 		tags: tagRows.map((e) => ({
 			repetition: num(e.repetition),
 			afterCount: num(e.afterCount),
@@ -101,6 +103,7 @@ export function valuesOf(d: DanceJson): DanceFormValues {
 		bpmMin: String(d.bpmMin),
 		bpmMax: String(d.bpmMax),
 		turn: d.turn ?? '',
+		formation: d.formation,
 		notes: d.notes,
 		choreographer: d.choreographer,
 		wellKnown: d.wellKnown,

@@ -4,7 +4,7 @@ import { and, desc, eq, isNull, sql } from 'drizzle-orm';
 import type { SessionUser } from '../users';
 import { holds } from '../guard';
 import { db } from '../db';
-import { dances, evenings, requests } from '../db/schema';
+import { dances, evenings, requests, tracks } from '../db/schema';
 
 export type RequestStatus = (typeof requests.$inferSelect)['status'];
 
@@ -20,6 +20,11 @@ export interface RequestItem {
 	eveningId: number | null;
 	eveningTitle: string | null;
 	eveningStartsAt: string | null;
+	/** The team's answer: a short message and, if they chose one, the track they will play. */
+	answer: string;
+	answerTrackId: number | null;
+	answerTrackTitle: string | null;
+	answeredAt: string | null;
 	createdAt: string;
 }
 
@@ -44,20 +49,37 @@ export function listRequests(viewer: SessionUser): RequestItem[] {
 			eveningId: requests.eveningId,
 			eveningTitle: evenings.title,
 			eveningStartsAt: evenings.startsAt,
+			answer: requests.answer,
+			answerTrackId: requests.answerTrackId,
+			answerTrackTitle: tracks.title,
+			answeredAt: requests.answeredAt,
 			createdAt: requests.createdAt
 		})
 		.from(requests)
 		.leftJoin(dances, eq(dances.id, requests.danceId))
+		.leftJoin(tracks, eq(tracks.id, requests.answerTrackId))
 		.leftJoin(evenings, eq(evenings.id, requests.eveningId))
 		.where(team ? undefined : eq(requests.requesterId, viewer.id))
 		.orderBy(sql`${requests.status} <> 'open'`, desc(requests.createdAt), desc(requests.id))
 		.all();
-	return rows.map(({ catalogueName, typedName, eveningStartsAt, createdAt, ...r }) => ({
-		...r,
-		danceName: catalogueName ?? typedName,
-		eveningStartsAt: eveningStartsAt ? eveningStartsAt.toISOString() : null,
-		createdAt: createdAt.toISOString()
-	}));
+	return rows.map(
+		({
+			catalogueName,
+			typedName,
+			eveningStartsAt,
+			answeredAt,
+			answerTrackTitle,
+			createdAt,
+			...r
+		}) => ({
+			...r,
+			danceName: catalogueName ?? typedName,
+			eveningStartsAt: eveningStartsAt ? eveningStartsAt.toISOString() : null,
+			answerTrackTitle: answerTrackTitle ?? null,
+			answeredAt: answeredAt ? answeredAt.toISOString() : null,
+			createdAt: createdAt.toISOString()
+		})
+	);
 }
 
 export function requestSlowerMusic(danceId: number, message: string, user: SessionUser) {
@@ -91,12 +113,35 @@ export function openSlowerMusicRequests(danceId: number) {
 		.all();
 }
 
-export function setRequestStatus(id: number, status: RequestStatus): boolean {
+export interface RequestAnswer {
+	status: RequestStatus;
+	/** Kept as it was when not given (a plain "Mark done" keeps the earlier answer). */
+	answer?: string;
+	trackId?: number | null;
+}
+
+/** Sets a request's status and the team's answer; false when there is no such request. */
+export function answerRequest(id: number, a: RequestAnswer): boolean {
 	const row = db()
 		.update(requests)
-		.set({ status })
+		.set({
+			status: a.status,
+			...(a.answer !== undefined ? { answer: a.answer } : {}),
+			...(a.trackId !== undefined ? { answerTrackId: a.trackId } : {}),
+			answeredAt: a.status === 'open' ? null : new Date()
+		})
 		.where(eq(requests.id, id))
 		.returning({ id: requests.id })
 		.get();
 	return !!row;
+}
+
+/** Dancers' requests for evenings still waiting for an answer: the navigation's count. */
+export function waitingRequests(): number {
+	const row = db()
+		.select({ n: sql<number>`count(*)` })
+		.from(requests)
+		.where(eq(requests.status, 'open'))
+		.get();
+	return row?.n ?? 0;
 }

@@ -14,6 +14,7 @@ import {
 import {
 	CROWD_MIXES,
 	ENTRY_KINDS,
+	FORMATIONS,
 	LEVELS,
 	ROLES,
 	SECTION_KINDS,
@@ -205,6 +206,7 @@ export const dances = sqliteTable(
 		bpmMin: real('bpm_min').notNull(),
 		bpmMax: real('bpm_max').notNull(),
 		turn: text('turn', { enum: ['left', 'right'] }),
+		formation: text('formation', { enum: FORMATIONS }).notNull().default('line'),
 		/** Tags and restarts: JSON PhraseEvent[] (see src/lib/domain.ts). */
 		events: text('events', { mode: 'json' })
 			.$type<
@@ -235,6 +237,7 @@ export const dances = sqliteTable(
 		check('dances_tempo', sql`${t.bpmMin} > 0 AND ${t.bpmMin} < ${t.bpmMax}`),
 		check('dances_level', sql`${t.level} IN (${oneOf(LEVELS)})`),
 		check('dances_turn', sql`${t.turn} IS NULL OR ${t.turn} IN ('left','right')`),
+		check('dances_formation', sql`${t.formation} IN (${oneOf(FORMATIONS)})`),
 		index('dances_name_idx').on(t.name)
 	]
 );
@@ -375,6 +378,12 @@ export const requests = sqliteTable(
 		status: text('status', { enum: ['open', 'planned', 'played', 'declined', 'done'] })
 			.notNull()
 			.default('open'),
+		/** The team's word back to the dancer, and the track they mean to play, if they said. */
+		answer: text('answer').notNull().default(''),
+		answerTrackId: integer('answer_track_id').references(() => tracks.id, {
+			onDelete: 'set null'
+		}),
+		answeredAt: integer('answered_at', { mode: 'timestamp_ms' }),
 		createdAt: createdAt()
 	},
 	(t) => [

@@ -31,6 +31,7 @@ export function describeEntries(entries: readonly PlanEntry[]) {
 			danceName: dance?.name ?? null,
 			danceLevel: dance?.level ?? null,
 			danceRhythm: dance?.rhythm ?? null,
+			danceFormation: dance?.formation ?? null,
 			trackTitle: track?.title ?? null,
 			trackArtist: track?.artist ?? null,
 			trackBpm: track?.bpm ?? null

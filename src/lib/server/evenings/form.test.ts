@@ -88,13 +88,29 @@ describe('the evening form', () => {
 	test('"a rest after every N minutes of dancing" is off when empty, kept, and checked', () => {
 		const sections = [['open-floor', 'Open floor', '19:30', '22:00']];
 		const off = readEveningForm(form({ ...base, end: '22:00' }, sections));
-		expect(off.ok && off.input.planSettings?.settings).toEqual({ breakEveryMin: 0 });
+		const mix = { partnerEvery: 3, partnerBackToBack: false };
+		expect(off.ok && off.input.planSettings?.settings).toEqual({ breakEveryMin: 0, ...mix });
 		const on = readEveningForm(form({ ...base, end: '22:00', restEveryMin: '40' }, sections));
-		expect(on.ok && on.input.planSettings?.settings).toEqual({ breakEveryMin: 40 });
+		expect(on.ok && on.input.planSettings?.settings).toEqual({ breakEveryMin: 40, ...mix });
 		if (!on.ok) return;
 		const id = createEvening(on.input, null);
 		expect(valuesOf(loadEvening(id)!).restEveryMin).toBe('40');
 		const bad = readEveningForm(form({ ...base, end: '22:00', restEveryMin: '5' }, sections));
 		expect(bad).toMatchObject({ ok: false, message: /10 minutes/ });
+	});
+	test('the line and partner mix: one after every 3 by default, kept, and checked', () => {
+		const sections = [['open-floor', 'Open floor', '19:30', '22:00']];
+		const set = readEveningForm(
+			form({ ...base, end: '22:00', partnerEvery: '2', partnerBackToBack: 'on' }, sections)
+		);
+		expect(set.ok && set.input.planSettings?.settings).toMatchObject({
+			partnerEvery: 2,
+			partnerBackToBack: true
+		});
+		if (!set.ok) return;
+		const back = valuesOf(loadEvening(createEvening(set.input, null))!);
+		expect(back).toMatchObject({ partnerEvery: '2', partnerBackToBack: true });
+		const bad = readEveningForm(form({ ...base, end: '22:00', partnerEvery: '40' }, sections));
+		expect(bad).toMatchObject({ ok: false, message: /12 line dances/ });
 	});
 });

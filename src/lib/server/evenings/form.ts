@@ -1,6 +1,7 @@
 // The evening form: wall-clock date and times in the club's zone ↔ stored instants. Times before
 // the evening's start are read as after midnight (an evening 19:30–00:30 ends the next day).
 import { and, asc, eq, inArray } from 'drizzle-orm';
+import { DEFAULT_SETTINGS } from '../../planner/settings';
 import type { EveningCreate } from '../../schemas/evening';
 import { eveningForm, type EveningFormInput } from '../../schemas/evening';
 import { db } from '../db';
@@ -32,6 +33,9 @@ export interface EveningValues {
 	neverPlay: number[];
 	/** "A rest after every N minutes of dancing": minutes, or '' for off (the default). */
 	restEveryMin: string;
+	/** "A partner dance after every N line dances": '0' (off) to '12'. */
+	partnerEvery: string;
+	partnerBackToBack: boolean;
 }
 
 const DAY_MS = 86_400_000;
@@ -81,7 +85,9 @@ export function readEveningForm(
 		sections,
 		mustPlay: nums(form, 'mustPlay').map(Number),
 		neverPlay: nums(form, 'neverPlay').map(Number),
-		restEveryMin: str(form, 'restEveryMin').trim()
+		restEveryMin: str(form, 'restEveryMin').trim(),
+		partnerEvery: str(form, 'partnerEvery').trim() || String(DEFAULT_SETTINGS.partnerEvery),
+		partnerBackToBack: form.get('partnerBackToBack') === 'on'
 	};
 	const parsed = eveningForm.safeParse(values);
 	if (!parsed.success) {
@@ -124,7 +130,11 @@ export function readEveningForm(
 				mustPlay: v.mustPlay,
 				neverPlay: { danceIds: v.neverPlay },
 				// 0 is the planner's "off": rests only where the sections put them.
-				settings: { breakEveryMin: v.restEveryMin === '' ? 0 : v.restEveryMin }
+				settings: {
+					breakEveryMin: v.restEveryMin === '' ? 0 : v.restEveryMin,
+					partnerEvery: v.partnerEvery,
+					partnerBackToBack: v.partnerBackToBack
+				}
 			}
 		}
 	};
@@ -137,7 +147,7 @@ export function valuesOf(e: EveningJson): EveningValues {
 	const ps = e.planSettings as {
 		mustPlay?: unknown[];
 		neverPlay?: { danceIds?: unknown[] };
-		settings?: { breakEveryMin?: unknown };
+		settings?: { breakEveryMin?: unknown; partnerEvery?: unknown; partnerBackToBack?: unknown };
 	};
 	const rest = Number(ps.settings?.breakEveryMin ?? 0);
 	return {
@@ -161,7 +171,9 @@ export function valuesOf(e: EveningJson): EveningValues {
 			typeof m === 'number' ? m : Number((m as { danceId?: number }).danceId)
 		),
 		neverPlay: (ps.neverPlay?.danceIds ?? []).map(Number),
-		restEveryMin: rest > 0 ? String(rest) : ''
+		restEveryMin: rest > 0 ? String(rest) : '',
+		partnerEvery: String(ps.settings?.partnerEvery ?? DEFAULT_SETTINGS.partnerEvery),
+		partnerBackToBack: ps.settings?.partnerBackToBack === true
 	};
 }
 
@@ -192,7 +204,9 @@ export function blankValues(): EveningValues {
 		],
 		mustPlay: [],
 		neverPlay: [],
-		restEveryMin: ''
+		restEveryMin: '',
+		partnerEvery: String(DEFAULT_SETTINGS.partnerEvery),
+		partnerBackToBack: false
 	};
 }
 
@@ -200,7 +214,13 @@ export function blankValues(): EveningValues {
 export function formChoices() {
 	return {
 		dances: db()
-			.select({ id: dances.id, name: dances.name, level: dances.level, rhythm: dances.rhythm })
+			.select({
+				id: dances.id,
+				name: dances.name,
+				level: dances.level,
+				rhythm: dances.rhythm,
+				formation: dances.formation
+			})
 			.from(dances)
 			.orderBy(asc(dances.name))
 			.all(),

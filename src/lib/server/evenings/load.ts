@@ -1,7 +1,7 @@
 // Reading evenings: one evening with its sections and run order as plain JSON (the API's shape,
 // also used by the exports and the public page), and the list of evenings.
 import { asc, desc, eq, inArray, sql } from 'drizzle-orm';
-import type { CrowdMix, EntryKind, Level, Rhythm, SectionKind } from '../../domain';
+import type { CrowdMix, EntryKind, Formation, Level, Rhythm, SectionKind } from '../../domain';
 import { db } from '../db';
 import { preparedFor } from '../db/prepared';
 import { dances, evenings, runOrderEntries, sections, tracks, users } from '../db/schema';
@@ -29,6 +29,7 @@ export interface EntryJson {
 	danceName: string | null;
 	danceLevel: Level | null;
 	danceRhythm: Rhythm | null;
+	danceFormation: Formation | null;
 	trackId: number | null;
 	trackTitle: string | null;
 	trackArtist: string | null;
@@ -97,6 +98,7 @@ const statements = preparedFor((d) => {
 				danceName: dances.name,
 				danceLevel: dances.level,
 				danceRhythm: dances.rhythm,
+				danceFormation: dances.formation,
 				trackTitle: tracks.title,
 				trackArtist: tracks.artist,
 				trackBpm: tracks.bpm
@@ -140,6 +142,7 @@ export function loadEntries(eveningId: number, startsAtMs: number): EntryJson[] 
 			danceName: r.danceName ?? null,
 			danceLevel: r.danceLevel ?? null,
 			danceRhythm: (r.danceRhythm as Rhythm | null) ?? null,
+			danceFormation: r.danceFormation ?? null,
 			trackId: e.trackId,
 			trackTitle: r.trackTitle ?? null,
 			trackArtist: r.trackArtist ?? null,

@@ -110,7 +110,11 @@ export function planInputFor(eveningId: number, seed?: number, draft?: Draft): P
 		startS: (Date.parse(s.startsAt) - start) / 1000
 	}));
 	const wanted = db()
-		.select({ danceId: requests.danceId })
+		.select({
+			danceId: requests.danceId,
+			status: requests.status,
+			trackId: requests.answerTrackId
+		})
 		.from(requests)
 		.where(
 			and(
@@ -159,7 +163,8 @@ export function planInputFor(eveningId: number, seed?: number, draft?: Draft): P
 			walls: d.walls,
 			bpmMin: d.bpmMin,
 			bpmMax: d.bpmMax,
-			wellKnown: d.wellKnown
+			wellKnown: d.wellKnown,
+			formation: d.formation
 		})),
 		tracks: cat.tracks.map((t) => ({
 			id: t.id,
@@ -169,8 +174,21 @@ export function planInputFor(eveningId: number, seed?: number, draft?: Draft): P
 			bpm: t.bpm
 		})),
 		fits: computedFits(cat),
-		requests: wanted.map((r) => ({ danceId: r.danceId! })),
-		mustPlay: ps.mustPlay ?? [],
+		// Accepted requests ("planned") weigh double and come first in the request block; the
+		// track the team answered with is played for it.
+		requests: wanted.map((r) =>
+			r.status === 'planned'
+				? { danceId: r.danceId!, weight: 2, first: true }
+				: { danceId: r.danceId! }
+		),
+		mustPlay: [
+			...(ps.mustPlay ?? []),
+			...wanted.flatMap((r) =>
+				r.status === 'planned' && r.trackId !== null
+					? [{ danceId: r.danceId!, trackId: r.trackId }]
+					: []
+			)
+		],
 		neverPlay: ps.neverPlay ?? {},
 		locked: lockedFrom(current, trackLength, sectionStarts, gapSeconds(evening.planSettings)),
 		settings: ps.settings ?? {},

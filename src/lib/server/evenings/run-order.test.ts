@@ -9,6 +9,7 @@ import { refuseStaleSave, saveRunOrder } from './run-order';
 import { runOrderSave } from '../../schemas/evening';
 import { seedLike } from './test-fixture';
 import { updateEvening } from './write';
+import { answerRequest, listRequests } from '../dances/requests';
 
 let cleanup: () => void;
 let refs: ReturnType<typeof seedLike>;
@@ -168,6 +169,38 @@ describe('planning from the database', () => {
 		expect(input.seed).toBe(7);
 		expect(input.fits.some((f) => f.verdict === 'fits')).toBe(true);
 		expect(input.fits.every((f) => f.score >= 0 && f.score <= 1)).toBe(true);
+	});
+
+	test('an accepted request weighs double, comes first, and brings its answered track', () => {
+		const swing = danceId('Saltmarsh Swing');
+		const track = refs.trackRows[2].id;
+		const [asked] = listRequests({ id: 0, name: '', email: '', roles: ['organiser'] }).filter(
+			(r) => r.danceId === swing && r.eveningId === 1
+		);
+		expect(
+			answerRequest(asked.id, { status: 'planned', answer: 'After the break', trackId: track })
+		).toBe(true);
+		const input = planInputFor(1, 7);
+		expect(input.requests).toEqual([{ danceId: swing, weight: 2, first: true }]);
+		expect(input.mustPlay).toContainEqual({ danceId: swing, trackId: track });
+		const [answered] = listRequests({ id: 0, name: '', email: '', roles: ['dj'] }).filter(
+			(r) => r.id === asked.id
+		);
+		expect(answered).toMatchObject({
+			status: 'planned',
+			answer: 'After the break',
+			answerTrackId: track
+		});
+		expect(answered.answeredAt).not.toBeNull();
+		// Declined, it leaves the planner's input; reopened, the answer's time is cleared.
+		answerRequest(asked.id, { status: 'declined' });
+		expect(planInputFor(1, 7).requests).toEqual([]);
+		answerRequest(asked.id, { status: 'open' });
+		const reopened = listRequests({ id: 0, name: '', email: '', roles: ['dj'] });
+		expect(reopened.find((r) => r.id === asked.id)).toMatchObject({
+			answeredAt: null,
+			answer: 'After the break'
+		});
 	});
 
 	test('a plan fits its dances, is deterministic and keeps a locked entry', () => {

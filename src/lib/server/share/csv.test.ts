@@ -17,7 +17,7 @@ describe('CSV export (RFC 4180)', () => {
 		expect(errors).toEqual([]);
 		expect(rows[0]).toEqual([...CSV_COLUMNS]);
 		expect(rows).toHaveLength(SHEET.entries.length + 1);
-		for (const r of rows) expect(r).toHaveLength(13);
+		for (const r of rows) expect(r).toHaveLength(14);
 	});
 
 	test('every record ends with CRLF, and no bare LF appears outside quotes (RFC 4180 §2.1–2.2)', () => {
@@ -35,6 +35,8 @@ describe('CSV export (RFC 4180)', () => {
 		expect(third[5]).toBe('Tin Roof, Rain');
 		// A text cell that would run as a formula is defused with an apostrophe (OWASP, from memory).
 		expect(third[12]).toBe("'=not a formula\nsecond line");
+		// The formation last, so a sheet that reads the older columns by position still works.
+		expect(rows.slice(1).map((r) => r[13])).toEqual(['line', 'line', 'partner', '', '']);
 	});
 
 	test('figures: start time, effective BPM = BPM × rate, duration in whole seconds', () => {

@@ -16,7 +16,8 @@ export const CSV_COLUMNS = [
 	'effective BPM',
 	'duration (s)',
 	'locked',
-	'notes'
+	'notes',
+	'formation'
 ] as const;
 
 type Cell = string | number | null;
@@ -52,7 +53,8 @@ export function buildCsv(sheet: RunSheet): string {
 			effectiveBpm(e),
 			Math.round(e.durationS),
 			e.locked ? 'yes' : 'no',
-			e.text
+			e.text,
+			e.formation ?? ''
 		])
 	);
 	// RFC 4180 §2: each record, the last included, ends with CRLF.

@@ -70,6 +70,7 @@ export function toSheet(
 			danceId: e.danceId,
 			danceName: lessonDance(evening, e),
 			level: e.danceLevel,
+			formation: e.danceFormation,
 			trackId: e.trackId,
 			trackTitle: e.trackTitle,
 			artist: e.trackArtist,

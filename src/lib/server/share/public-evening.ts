@@ -1,6 +1,6 @@
 // What the public page shows a dancer: only facts meant for the floor. No e-mails, no people's
 // names beyond a teacher's first name, no notes, no announcements' text, no choice reasons.
-import { asc, eq } from 'drizzle-orm';
+import { and, asc, desc, eq, isNotNull, ne } from 'drizzle-orm';
 import type { EntryKind, Level, SectionKind } from '../../domain';
 import { config } from '../config';
 import { db } from '../db';
@@ -31,6 +31,8 @@ export interface PublicEvening {
 		durationS: number;
 		danceName: string | null;
 		level: Level | null;
+		/** Said on the page, so dancers find a partner in time. */
+		partner: boolean;
 	}[];
 }
 
@@ -63,11 +65,50 @@ export function publicEvening(token: string): PublicEvening | null {
 					startsAt: e.startsAt,
 					durationS: e.durationS,
 					danceName: e.danceName,
-					level: e.level
+					level: e.level,
+					partner: e.kind === 'dance' && e.formation === 'partner'
 				}
 			];
 		})
 	};
+}
+
+export interface PublicAnswer {
+	danceName: string;
+	status: 'planned' | 'declined' | 'done' | 'played';
+	answer: string;
+}
+
+/**
+ * The team's answers to this evening's requests, for everyone on the page: the dance, the
+ * outcome and the team's words. Never who asked, nor the track (the page names no music).
+ */
+export function publicAnswers(eveningId: number): PublicAnswer[] {
+	const rows = db()
+		.select({
+			catalogueName: dances.name,
+			typedName: requests.danceName,
+			status: requests.status,
+			answer: requests.answer
+		})
+		.from(requests)
+		.leftJoin(dances, eq(dances.id, requests.danceId))
+		.where(
+			and(
+				eq(requests.eveningId, eveningId),
+				eq(requests.kind, 'dance'),
+				ne(requests.status, 'open'),
+				isNotNull(requests.answeredAt)
+			)
+		)
+		.orderBy(desc(requests.answeredAt))
+		.limit(30)
+		.all();
+	return rows.map((r) => ({
+		danceName: r.catalogueName ?? r.typedName,
+		status: r.status as PublicAnswer['status'],
+		answer: r.answer
+	}));
 }
 
 /** The catalogue a dancer may pick from: names and levels only. */

@@ -36,7 +36,9 @@ export function sheetView(sheet: RunSheet) {
 		entries: sheet.entries.map((e) => ({
 			position: e.position,
 			time: at(e.startsAt),
-			kind: e.kind === 'dance' ? '' : KIND_LABELS[e.kind],
+			// The print says "partner dance" beside it, so the floor finds partners in time.
+			kind:
+				e.kind !== 'dance' ? KIND_LABELS[e.kind] : e.formation === 'partner' ? 'Partner dance' : '',
 			title: entryTitle(e),
 			track: trackLine(e),
 			note: e.danceName && e.text.trim() ? e.text.trim() : '',

@@ -4,6 +4,7 @@ import {
 	LEVEL_LABELS,
 	type CrowdMix,
 	type EntryKind,
+	type Formation,
 	type Level,
 	type SectionKind
 } from '../../domain';
@@ -28,6 +29,7 @@ export interface SheetEntry {
 	danceId: number | null;
 	danceName: string | null;
 	level: Level | null;
+	formation: Formation | null;
 	trackId: number | null;
 	trackTitle: string | null;
 	artist: string | null;

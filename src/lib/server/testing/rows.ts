@@ -14,6 +14,7 @@ export const aDance = (over: Partial<DanceInput> = {}): DanceInput => ({
 	bpmMin: 110,
 	bpmMax: 126,
 	turn: 'left',
+	formation: 'line',
 	tags: [],
 	restarts: [],
 	notes: '',

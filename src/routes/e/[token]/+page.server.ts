@@ -2,7 +2,12 @@ import { randomUUID } from 'node:crypto';
 import { error, fail, type RequestEvent } from '@sveltejs/kit';
 import { describeIssue } from '$lib/server/json-body';
 import { publicRoute } from '$lib/server/guard';
-import { publicEvening, requestableDances, storeRequest } from '$lib/server/share/public-evening';
+import {
+	publicAnswers,
+	publicEvening,
+	requestableDances,
+	storeRequest
+} from '$lib/server/share/public-evening';
 import { qrDataUrl } from '$lib/server/share/qr';
 import { DEVICE_COOKIE, takeRequest } from '$lib/server/share/request-limit';
 import { publicView } from './public-view';
@@ -21,7 +26,8 @@ export const load = (async (event) => {
 	return {
 		evening: publicView(evening),
 		qr: await qrDataUrl(evening.shareUrl),
-		dances: requestableDances()
+		dances: requestableDances(),
+		answers: publicAnswers(evening.id)
 	};
 }) satisfies PageServerLoad;
 

@@ -28,6 +28,7 @@ export function publicView(e: PublicEvening) {
 			kind: x.kind,
 			dance: x.danceName,
 			level: x.level ? LEVEL_LABELS[x.level] : null,
+			partner: x.partner,
 			length: minutesSeconds(x.durationS)
 		}))
 	};

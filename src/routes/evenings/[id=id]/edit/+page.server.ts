@@ -44,10 +44,8 @@ export const actions = {
 						...ps.neverPlay,
 						danceIds: read.input.planSettings?.neverPlay?.danceIds ?? []
 					},
-					settings: {
-						...ps.settings,
-						breakEveryMin: read.input.planSettings?.settings?.breakEveryMin ?? 0
-					}
+					// The form's own settings over the ones it does not show.
+					settings: { ...ps.settings, ...read.input.planSettings?.settings }
 				},
 				version
 			});
