@@ -105,7 +105,7 @@ test('the organiser plans the demo evening, drags and locks an entry, re-plans a
 	await expect(kept.getByTestId('entry-time')).toHaveText(time!);
 });
 
-test('two editors at once: the stale save gets 409 and a reload offer, nothing is lost', async ({
+test('two editors at once: the stale save gets 409 and both versions to choose from', async ({
 	page
 }) => {
 	const other = await newRequest.newContext({ baseURL: BASE });
@@ -130,8 +130,31 @@ test('two editors at once: the stale save gets 409 and a reload offer, nothing i
 	expect((await other.get('/api/evenings/1/run-order').then((r) => r.json())).entries).toHaveLength(
 		first.length - 1
 	);
-	await notice.getByRole('button', { name: 'Reload the saved run order' }).click();
+	// Both versions side by side, the lines that differ marked.
+	await expect(notice.getByTestId('conflict-mine').locator('li')).toHaveCount(first.length);
+	await expect(notice.getByTestId('conflict-theirs').locator('li')).toHaveCount(first.length - 1);
+	await expect(notice.locator('li[data-differs="true"]').first()).toBeVisible();
+	await notice.getByRole('button', { name: 'Take the saved version' }).click();
 	await expect(page.getByTestId('entry')).toHaveCount(first.length - 1);
+
+	// Once more, and this time keep mine: it is saved over the other, knowingly.
+	const again = await (await other.get('/api/evenings/1/run-order')).json();
+	expect(
+		(
+			await other.put('/api/evenings/1/run-order', {
+				data: { version: again.runOrderVersion, entries: again.entries.slice(0, -1) },
+				headers
+			})
+		).status()
+	).toBe(200);
+	await page.getByTestId('entry').first().getByRole('button', { name: /^Down/ }).click();
+	const mine = await entryNames(page);
+	await page.getByRole('button', { name: 'Save the run order' }).click();
+	await notice.getByRole('button', { name: 'Keep mine and save it' }).click();
+	await expect(notice).toContainText('Saved.');
+	const kept = (await other.get('/api/evenings/1/run-order').then((r) => r.json())).entries;
+	// Theirs had one entry fewer than mine: the saved length says whose version won.
+	expect(kept).toHaveLength(mine.length);
 	// The stale call as the API sees it.
 	const stale = await other.put('/api/evenings/1/run-order', {
 		data: { version: current.runOrderVersion, entries: [] },
