@@ -198,7 +198,7 @@ test('the DJ downloads a draft evening kit in the browser; every file in it read
 		page.waitForEvent('download'),
 		page.getByRole('link', { name: 'Evening kit (zip)' }).click()
 	]);
-	expect(download.suggestedFilename()).toBe(`evening-${own}-kit.zip`);
+	expect(download.suggestedFilename()).toBe('copperlane-share-check-2027-02-05-kit.zip');
 	const files = await unzip(await readFile(await download.path()));
 
 	const papers = ['run-order.m3u8', 'run-order.csv', 'run-sheet.pdf', 'read-me.txt'];
@@ -245,7 +245,10 @@ test('exports download as attachments and read back with independent parsers', a
 	expect(entries.length).toBeGreaterThan(5);
 	const csv = await organiser.get(`/api/evenings/${own}/export.csv`);
 	expect(csv.status()).toBe(200);
-	expect(csv.headers()['content-disposition']).toBe(`attachment; filename="evening-${own}.csv"`);
+	// Issue 15: the evening's name and date, not its id.
+	expect(csv.headers()['content-disposition']).toBe(
+		'attachment; filename="copperlane-share-check-2027-02-05.csv"'
+	);
 	// papaparse reading RFC 4180 CSV: one record per entry after the header, durations as saved.
 	const rows = Papa.parse<string[]>(await csv.text(), { newline: '\r\n' }).data.filter(
 		(r) => r.length > 1
@@ -277,7 +280,9 @@ test('exports download as attachments and read back with independent parsers', a
 
 	const pdf = await organiser.get(`/api/evenings/${own}/export.pdf`);
 	expect(pdf.headers()['content-type']).toBe('application/pdf');
-	expect(pdf.headers()['content-disposition']).toBe(`attachment; filename="evening-${own}.pdf"`);
+	expect(pdf.headers()['content-disposition']).toBe(
+		'attachment; filename="copperlane-share-check-2027-02-05.pdf"'
+	);
 	expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
 });
 
@@ -550,8 +555,8 @@ test('the organiser e-mails the run order; it lands in the outbox with CSV and P
 	await message.locator('summary').click();
 	await expect(message).toContainText('Doors at half six (e2e).');
 	const attachments = message.getByRole('list', { name: 'Attachments' });
-	await expect(attachments).toContainText(`evening-${EVENING}.csv`);
-	await expect(attachments).toContainText(`evening-${EVENING}.pdf`);
+	await expect(attachments).toContainText(/lantern-night-social-\d{4}-\d{2}-\d{2}\.csv/);
+	await expect(attachments).toContainText(/lantern-night-social-\d{4}-\d{2}-\d{2}\.pdf/);
 	await expect(
 		admin.getByTestId('outbox-message').filter({ hasText: 'instructor@floorset.test' })
 	).toHaveCount(1);

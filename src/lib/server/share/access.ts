@@ -6,7 +6,7 @@ import { idParam } from '../../route-id';
 import { config } from '../config';
 import type { SessionUser } from '../users';
 import { loadSheet } from './load-sheet';
-import type { RunSheet } from './sheet';
+import { fileStem, type RunSheet } from './sheet';
 
 export function notFound(message = 'No such evening.'): never {
 	error(404, { message, error: message });
@@ -28,12 +28,12 @@ export function readableSheet(user: SessionUser, rawId: string): RunSheet {
 	return sheet;
 }
 
-/** Attachment headers with a file name made from the evening's id only, never from its text. */
-export function download(body: BodyInit, type: string, id: number, ext: string): Response {
+/** Attachment headers, named by the evening's title and date reduced to [a-z0-9-] (fileStem). */
+export function download(body: BodyInit, type: string, sheet: RunSheet, ext: string): Response {
 	return new Response(body, {
 		headers: {
 			'content-type': type,
-			'content-disposition': `attachment; filename="evening-${id}.${ext}"`,
+			'content-disposition': `attachment; filename="${fileStem(sheet)}.${ext}"`,
 			'cache-control': 'private, no-store'
 		}
 	});

@@ -11,6 +11,7 @@ import { buildCsv } from './csv';
 import { buildPdf } from './pdf';
 import {
 	effectiveBpm,
+	fileStem,
 	entryTitle,
 	KIND_LABELS,
 	rateText,
@@ -101,8 +102,8 @@ export async function sendRunOrder(
 		`Run order: ${sheet.title} (${wallDate(sheet.startsAt, sheet.timeZone)})`
 	);
 	const attachments = [
-		{ filename: `evening-${sheet.id}.csv`, content: csv, contentType: 'text/csv; charset=utf-8' },
-		{ filename: `evening-${sheet.id}.pdf`, content: pdf, contentType: 'application/pdf' }
+		{ filename: `${fileStem(sheet)}.csv`, content: csv, contentType: 'text/csv; charset=utf-8' },
+		{ filename: `${fileStem(sheet)}.pdf`, content: pdf, contentType: 'application/pdf' }
 	];
 	let sent = 0;
 	for (const person of recipients) {

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { SHEET } from '../testing/sheet';
 import { kitFileName, kitPlaylist, kitReadMe, namePart, planKit } from './kit';
+import { fileStem } from './sheet';
 
 const files = (id: number) =>
 	({
@@ -82,5 +83,28 @@ describe('what goes in the kit', () => {
 		expect(readMe).toContain('01 - Hayloft Lanterns - The Wrenhill Five.mp3: play at');
 		expect(readMe).toContain('100 dB');
 		expect(readMe.split('\r\n').length).toBeGreaterThan(5);
+	});
+});
+
+describe('download names', () => {
+	// Issue 15's example: the evening's name and its date in the club's zone.
+	test('title and date in the club’s zone, plain ASCII', () => {
+		const at = Date.parse('2026-12-11T19:30:00Z');
+		const base = { id: 3, startsAt: at, timeZone: 'Europe/London' };
+		expect(fileStem({ ...base, title: 'Lantern Night' })).toBe('lantern-night-2026-12-11');
+		expect(fileStem({ ...base, title: 'Café “Señor” Nights!' })).toBe(
+			'cafe-senor-nights-2026-12-11'
+		);
+		// 23:30 UTC on the 11th is already the 12th in Auckland (UTC+13 in December).
+		expect(
+			fileStem({
+				...base,
+				title: 'Late',
+				startsAt: Date.parse('2026-12-11T23:30:00Z'),
+				timeZone: 'Pacific/Auckland'
+			})
+		).toBe('late-2026-12-12');
+		expect(fileStem({ ...base, title: 'ダンス' })).toBe('evening-3-2026-12-11');
+		expect(fileStem({ ...base, title: 'x"; rm -rf /' })).toMatch(/^[a-z0-9-]+$/);
 	});
 });

@@ -251,8 +251,8 @@ describe('e-mailing the run order', () => {
 			expect(m.text).toContain('19:21  Pebble Lane Stroll (Beginner) — Hayloft Lanterns');
 			expect(m.text).toContain('100 dB LAeq');
 			expect(m.attachments.map((a) => [a.filename, a.contentType])).toEqual([
-				['evening-1.csv', 'text/csv'],
-				['evening-1.pdf', 'application/pdf']
+				['thistlewick-barn-social-2026-12-11.csv', 'text/csv'],
+				['thistlewick-barn-social-2026-12-11.pdf', 'application/pdf']
 			]);
 			expect(m.attachments.every((a) => a.size > 100)).toBe(true);
 		}

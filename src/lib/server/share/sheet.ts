@@ -134,3 +134,27 @@ export function wallDate(ms: number, timeZone: string): string {
 
 /** "0.90" for a rate, always two decimals so columns line up. */
 export const rateText = (rate: number) => rate.toFixed(2);
+
+/**
+ * The name the evening's downloads carry: its title in plain lower-case ASCII and its date in
+ * the club's zone, e.g. "lantern-night-2026-12-11". Only [a-z0-9-], so no header can be forged
+ * through it; a title with no Latin letters falls back to "evening-<id>".
+ */
+export function fileStem(sheet: Pick<RunSheet, 'id' | 'title' | 'startsAt' | 'timeZone'>): string {
+	const slug = sheet.title
+		.normalize('NFKD')
+		.replace(/[\u0300-\u036f]/g, '')
+		.toLowerCase()
+		.replace(/[^a-z0-9]+/g, '-')
+		.replace(/^-+|-+$/g, '')
+		.slice(0, 60)
+		.replace(/-+$/, '');
+	// en-CA writes dates as ISO 8601 does: YYYY-MM-DD.
+	const day = new Intl.DateTimeFormat('en-CA', {
+		timeZone: sheet.timeZone,
+		year: 'numeric',
+		month: '2-digit',
+		day: '2-digit'
+	}).format(new Date(sheet.startsAt));
+	return `${slug || `evening-${sheet.id}`}-${day}`;
+}

@@ -8,5 +8,5 @@ export const GET = ((event) => {
 	const sheet = readableSheet(requireRight(event, 'readEvenings'), event.params.id);
 	const ics = buildIcs(sheet, { host: new URL(config().origin).hostname });
 	// RFC 5545 §8.1 registers text/calendar.
-	return download(ics, 'text/calendar; charset=utf-8', sheet.id, 'ics');
+	return download(ics, 'text/calendar; charset=utf-8', sheet, 'ics');
 }) satisfies RequestHandler;

@@ -16,5 +16,5 @@ export const GET = ((event) => {
 		? (e) => playUrl(origin, { eveningId: sheet.id, trackId: e.trackId, expires }, appPlayKey())
 		: (e) => audioUrl(origin, e.trackId);
 	// RFC 8216 §4: a playlist is served as application/vnd.apple.mpegurl or audio/mpegurl.
-	return download(buildM3u8(sheet, uriOf), 'audio/mpegurl', sheet.id, 'm3u8');
+	return download(buildM3u8(sheet, uriOf), 'audio/mpegurl', sheet, 'm3u8');
 }) satisfies RequestHandler;

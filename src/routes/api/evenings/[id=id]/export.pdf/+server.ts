@@ -6,5 +6,5 @@ import type { RequestHandler } from './$types';
 export const GET = (async (event) => {
 	const sheet = readableSheet(requireRight(event, 'readEvenings'), event.params.id);
 	const pdf = await buildPdf(sheet);
-	return download(new Uint8Array(pdf), 'application/pdf', sheet.id, 'pdf');
+	return download(new Uint8Array(pdf), 'application/pdf', sheet, 'pdf');
 }) satisfies RequestHandler;

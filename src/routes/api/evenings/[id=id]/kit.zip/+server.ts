@@ -1,6 +1,7 @@
 import { requireRight } from '$lib/server/guard';
 import { readableSheet } from '$lib/server/share/access';
 import { buildKit } from '$lib/server/share/kit';
+import { fileStem } from '$lib/server/share/sheet';
 import type { RequestHandler } from './$types';
 
 export const GET = (async (event) => {
@@ -11,7 +12,7 @@ export const GET = (async (event) => {
 		headers: {
 			'content-type': 'application/zip',
 			'content-length': String(kit.size),
-			'content-disposition': `attachment; filename="evening-${sheet.id}-kit.zip"`,
+			'content-disposition': `attachment; filename="${fileStem(sheet)}-kit.zip"`,
 			'cache-control': 'private, no-store'
 		}
 	});
