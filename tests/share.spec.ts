@@ -309,6 +309,14 @@ test('signed out, the public page is served as rendered until the evening change
 	expect(first.headers()['set-cookie']).toBeUndefined();
 	expect(again.headers()['set-cookie']).toBeUndefined();
 	expect(await again.text()).toBe(await first.text());
+	// HTTP caching (RFC 9110 §13.1.2): the kept page carries an ETag; asking with it gets a 304
+	// with no body, so a phone that has the page fetches nothing again.
+	const etag = again.headers()['etag'];
+	expect(etag).toMatch(/^"[A-Za-z0-9_-]{27}(-gzip)?"$/);
+	expect(again.headers()['cache-control']).toBe('no-cache');
+	const unchanged = await anon.get(shareUrl, { headers: { 'if-none-match': etag } });
+	expect(unchanged.status()).toBe(304);
+	expect((await unchanged.body()).length).toBe(0);
 	// A page served twice carries hashes in its policy, never a one-time nonce.
 	const csp = again.headers()['content-security-policy'];
 	expect(csp).toMatch(/script-src 'self' 'sha256-[A-Za-z0-9+/=]+'/);
@@ -320,7 +328,10 @@ test('signed out, the public page is served as rendered until the evening change
 		data: { title: 'Copperlane Share Check, renamed' }
 	});
 	expect(renamed.status(), await renamed.text()).toBe(200);
-	expect(await (await anon.get(shareUrl)).text()).toContain('Copperlane Share Check, renamed');
+	const renamedPage = await anon.get(shareUrl, { headers: { 'if-none-match': etag } });
+	expect(renamedPage.status()).toBe(200);
+	expect(renamedPage.headers()['etag']).not.toBe(etag);
+	expect(await renamedPage.text()).toContain('Copperlane Share Check, renamed');
 
 	// A signed-in visitor never gets the signed-out page: their own name is in the navigation.
 	const mine = await organiser.get(shareUrl);

@@ -50,6 +50,25 @@ describe('CachedBody', () => {
 		expect(kept.gzip()).toBe(kept.gzip());
 	});
 
+	// RFC 9110 §13.1.2 / §15.4.5: a client holding the same form gets 304 and no body; each
+	// form (plain, gzip) has its own tag, and a weak "W/" prefix compares equal.
+	test('If-None-Match with the tag of the form sent gives 304, with the tag and no body', async () => {
+		const cond = (tag: string, encoding = 'gzip') =>
+			new Request('http://127.0.0.1/x', {
+				headers: { 'accept-encoding': encoding, 'if-none-match': tag }
+			});
+		const hit = kept.respond(cond('"x", W/"a1-gzip"'), { headers: { etag: '"a1"' } });
+		expect(hit.status).toBe(304);
+		expect(hit.headers.get('etag')).toBe('"a1-gzip"');
+		expect(await hit.text()).toBe('');
+		// The plain tag does not stand for the gzip form, nor an old tag for the new bytes.
+		expect(kept.respond(cond('"a1"'), { headers: { etag: '"a1"' } }).status).toBe(200);
+		expect(kept.respond(cond('"a0-gzip"'), { headers: { etag: '"a1"' } }).status).toBe(200);
+		expect(kept.respond(cond('*', 'identity'), { headers: { etag: '"a1"' } }).status).toBe(304);
+		// Without a tag of its own the answer cannot be matched.
+		expect(kept.respond(cond('*'), { headers: {} }).status).toBe(200);
+	});
+
 	test('a small body goes out as it is', async () => {
 		const small = new CachedBody(new TextEncoder().encode('{"ok":true}'));
 		const res = small.respond(ask('gzip'), { headers: {} });

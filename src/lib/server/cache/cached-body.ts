@@ -36,9 +36,23 @@ export class CachedBody {
 			const etag = headers.get('etag');
 			if (etag?.endsWith('"')) headers.set('etag', `${etag.slice(0, -1)}-gzip"`);
 		}
+		// RFC 9110 §13.1.2: the client already holds this form; §15.4.5: 304, with no body.
+		const etag = headers.get('etag');
+		if (etag && (init.status ?? 200) === 200 && matchesNoneMatch(request, etag)) {
+			headers.delete('content-encoding');
+			return new Response(null, { status: 304, headers });
+		}
 		headers.set('content-length', String(body.byteLength));
 		return replayBytes(body, { status: init.status, headers });
 	}
+}
+
+/** Whether a GET's If-None-Match names `etag` (weak comparison, RFC 9110 §8.8.3.2) or is "*". */
+export function matchesNoneMatch(request: Request, etag: string): boolean {
+	const header = request.headers.get('if-none-match');
+	if (!header || (request.method !== 'GET' && request.method !== 'HEAD')) return false;
+	const opaque = (tag: string) => tag.trim().replace(/^W\//, '');
+	return header.split(',').some((t) => t.trim() === '*' || opaque(t) === opaque(etag));
 }
 
 /** Whether an Accept-Encoding header (RFC 9110 §12.5.3) allows gzip: named or `*`, q above 0. */

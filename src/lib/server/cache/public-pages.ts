@@ -4,6 +4,7 @@
 // are kept (no session cookie, no query), and only when no write overlapped the rendering. The
 // Content-Security-Policy uses hashes (svelte.config.js), not a per-response nonce, so a page
 // served twice weakens nothing.
+import { createHash } from 'node:crypto';
 import type { Handle } from '@sveltejs/kit';
 import { db } from '../db';
 import { clearing, sessionCookieNames } from '../session-cookie';
@@ -72,13 +73,22 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 		) {
 			return response;
 		}
+		const bytes = new Uint8Array(await response.arrayBuffer());
 		page = {
 			status: response.status,
-			// Length and encoding are set for each reply, by the form it goes out in.
-			headers: [...response.headers].filter(
-				([name]) => name !== 'content-length' && name !== 'set-cookie'
-			),
-			body: new CachedBody(new Uint8Array(await response.arrayBuffer()))
+			// Length and encoding are set for each reply, by the form it goes out in. A browser
+			// (or a proxy) may keep the page but asks again each time; the ETag turns an unchanged
+			// page into a 304 with no body (RFC 9111 §5.2.2.4, RFC 9110 §13.1.2). A signed-in
+			// visitor's page differs, hence Vary: Cookie.
+			headers: [
+				...[...response.headers].filter(
+					([name]) => !['content-length', 'set-cookie', 'cache-control', 'etag'].includes(name)
+				),
+				['cache-control', 'no-cache'],
+				['vary', 'cookie'],
+				['etag', `"${createHash('sha256').update(bytes).digest('base64url').slice(0, 27)}"`]
+			],
+			body: new CachedBody(bytes)
 		};
 		publicPages.set(key, stamp, page);
 		return withCookies(replay(page, event.request), cookies);
