@@ -201,6 +201,13 @@ test('the DJ judges dances from a track’s own list', async ({ page }) => {
 	expect(item.verdict).toBe('does-not-fit');
 	// A rejected pairing ranks last from the track's side too.
 	expect(after.items.at(-1).dance.id).toBe(danceId);
+	// Taken back (issue 15): the pair is not judged again and the computed fit decides.
+	await mine.getByRole('button', { name: /^Clear the verdict/ }).click();
+	await expect(mine.getByTestId('verdict')).toHaveAttribute('data-verdict', '');
+	const cleared = await (await page.request.get(`/api/tracks/${trackId}/fits?limit=100`)).json();
+	expect(cleared.items.find((i: { dance: { id: number } }) => i.dance.id === danceId).verdict).toBe(
+		null
+	);
 });
 
 test('the crowd level changes the lesson target', async ({ page }) => {

@@ -225,6 +225,14 @@ export const MATRIX: MatrixRow[] = [
 		allowed: ['dj', 'instructor'],
 		body: {}
 	},
+	{
+		method: 'DELETE',
+		route: '/api/fits',
+		path: '/api/fits',
+		status: 422,
+		allowed: ['dj', 'instructor'],
+		body: {}
+	},
 	// end of dance catalogue and fits rows
 	{
 		method: 'GET',

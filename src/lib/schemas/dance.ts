@@ -137,6 +137,9 @@ export const fitVerdictSchema = z.object({
 });
 export type FitVerdictInput = z.infer<typeof fitVerdictSchema>;
 
+/** One track–dance pair, as the verdict's DELETE names it. */
+export const fitPairSchema = fitVerdictSchema.pick({ trackId: true, danceId: true });
+
 /** Several tracks marked for one dance in one step (the music table's selection). */
 export const fitVerdictBulkSchema = fitVerdictSchema.omit({ trackId: true }).extend({
 	trackIds: z

@@ -8,7 +8,7 @@ import { eq } from 'drizzle-orm';
 import { fits, tracks } from '../db/schema';
 import { trackFacts } from './load';
 import { fitsForDance, fitsForTrack, parseLimit } from './ranking';
-import { setVerdict, setVerdicts } from './verdicts';
+import { clearVerdict, setVerdict, setVerdicts } from './verdicts';
 
 let t: ReturnType<typeof makeTestDb>;
 beforeEach(() => (t = makeTestDb()));
@@ -90,6 +90,16 @@ describe('PUT /api/fits', () => {
 		// 130 BPM into 110–126: the engine picks a rate below 1 (126/130 ≈ 0.969).
 		expect(rows[0].rate).toBeLessThan(1);
 		expect(rows[0].rate).toBeGreaterThan(0.92);
+	});
+
+	test('a cleared verdict is gone: the pair is not judged, and clearing again finds nothing', () => {
+		const user = aUser(t.db);
+		const dance = createDance(aDance(), user);
+		const track = aTrack(t.db, { bpm: 120 });
+		setVerdict({ trackId: track.id, danceId: dance.id, verdict: 'does-not-fit' }, user);
+		expect(clearVerdict(track.id, dance.id)).toBe(true);
+		expect(t.db.select().from(fits).all()).toEqual([]);
+		expect(clearVerdict(track.id, dance.id)).toBe(false);
 	});
 
 	test('404 for an unknown track or dance', () => {

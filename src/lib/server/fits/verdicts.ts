@@ -1,5 +1,5 @@
 // The team's verdict on a track for a dance: one row per pair, replaced by the latest word.
-import { sql } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { fitTrackToDance } from '../../fit';
 import type { FitVerdictBulkInput, FitVerdictInput } from '../../schemas/dance';
 import { danceRow } from '../dances/catalogue';
@@ -86,4 +86,14 @@ class BulkStop extends Error {
 	) {
 		super(message);
 	}
+}
+
+/** Takes the team's verdict back: the pair is "not judged" again and the computed fit rules. */
+export function clearVerdict(trackId: number, danceId: number): boolean {
+	const row = db()
+		.delete(fits)
+		.where(and(eq(fits.trackId, trackId), eq(fits.danceId, danceId)))
+		.returning({ trackId: fits.trackId })
+		.get();
+	return !!row;
 }

@@ -2,8 +2,8 @@ import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireRight } from '$lib/server/guard';
 import { badRequest, describeIssue, readJson } from '$lib/server/json-body';
-import { setVerdict, setVerdicts } from '$lib/server/fits/verdicts';
-import { fitVerdictBulkSchema, fitVerdictSchema } from '$lib/schemas/dance';
+import { clearVerdict, setVerdict, setVerdicts } from '$lib/server/fits/verdicts';
+import { fitPairSchema, fitVerdictBulkSchema, fitVerdictSchema } from '$lib/schemas/dance';
 import type { fits } from '$lib/server/db/schema';
 import type { RequestHandler } from './$types';
 
@@ -40,4 +40,14 @@ export const PUT = (async (event) => {
 	const result = setVerdict(one.data, me.id);
 	if (!result.ok) return badRequest(result.error, result.status);
 	return json(shape(result.fit));
+}) satisfies RequestHandler;
+
+/** { trackId, danceId } clears the team's verdict on the pair ("not judged" again). */
+export const DELETE = (async (event) => {
+	requireRight(event, 'fits');
+	const body = await readJson(event.request, fitPairSchema);
+	if (!body.ok) return body.response;
+	if (!clearVerdict(body.data.trackId, body.data.danceId))
+		return badRequest('The team has no verdict on this pair.', 404);
+	return json({ trackId: body.data.trackId, danceId: body.data.danceId, verdict: null });
 }) satisfies RequestHandler;
