@@ -49,6 +49,12 @@ test('formation: a partner dance is set in the form, filtered for and served by 
 	await expect(page.getByLabel('Formation')).toHaveValue('partner');
 	await page.goto('/dances?formation=circle');
 	await expect(page.getByRole('link', { name: NAME })).toHaveCount(0);
+	// Counts and walls filter too (issue 15): the dance is 32 counts, 4 walls.
+	await page.goto('/dances?formation=partner&counts=32&walls=4');
+	await expect(page.getByRole('link', { name: NAME })).toBeVisible();
+	await expect(page.getByLabel('Walls')).toHaveValue('4');
+	await page.goto('/dances?counts=32&walls=2');
+	await expect(page.getByRole('link', { name: NAME })).toHaveCount(0);
 	const api = await page.request.get(`/api/dances/${danceId}`);
 	expect((await api.json()).formation).toBe('partner');
 });

@@ -108,6 +108,11 @@ export const danceFilterSchema = z.object({
 		.pipe(z.union([z.literal(3), z.literal(4)]))
 		.optional(),
 	formation: z.enum(FORMATIONS).optional(),
+	counts: z.coerce.number().int().positive().max(1024).optional(),
+	walls: z.coerce
+		.number()
+		.pipe(z.union([z.literal(1), z.literal(2), z.literal(4)]))
+		.optional(),
 	/** A tempo in BPM the dance's range must hold. */
 	tempo: z.coerce.number().positive().lt(400).optional()
 });

@@ -18,6 +18,8 @@ export const load = ((event) => {
 			rhythm: filter.rhythm ?? '',
 			meter: filter.meter ? String(filter.meter) : '',
 			formation: filter.formation ?? '',
+			counts: filter.counts ? String(filter.counts) : '',
+			walls: filter.walls ? String(filter.walls) : '',
 			tempo: filter.tempo ? String(filter.tempo) : ''
 		},
 		filterProblem: parsed.success ? null : 'One of the filters was not understood and is ignored.',

@@ -61,6 +61,15 @@ describe('dance catalogue', () => {
 		expect(listDances({ tempo: 125 }).map((d) => d.name)).toEqual(['Beta 100% Waltz']);
 	});
 
+	test('filters by counts, walls and formation', () => {
+		createDance(aDance({ name: 'Gamma Step', counts: 48, walls: 2 }), null);
+		createDance(aDance({ name: 'Delta Pair', counts: 32, walls: 1, formation: 'partner' }), null);
+		expect(listDances({ counts: 48 }).map((d) => d.name)).toEqual(['Gamma Step']);
+		expect(listDances({ walls: 1 }).map((d) => d.name)).toEqual(['Delta Pair']);
+		expect(listDances({ formation: 'partner', counts: 48 })).toEqual([]);
+		expect(listDances({ formation: 'line' }).map((d) => d.name)).toEqual(['Gamma Step']);
+	});
+
 	test('PATCH with the current version saves and bumps it; a stale version is a 409', () => {
 		const d = createDance(aDance(), null);
 		const first = updateDance(d.id, { version: 1, name: 'Renamed Ramble', bpmMax: 130 });

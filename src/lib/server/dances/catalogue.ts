@@ -30,6 +30,8 @@ export function listDances(filter: DanceFilter = {}): DanceJson[] {
 	if (filter.rhythm) where.push(eq(dances.rhythm, filter.rhythm));
 	if (filter.meter) where.push(eq(dances.meter, filter.meter));
 	if (filter.formation) where.push(eq(dances.formation, filter.formation));
+	if (filter.counts) where.push(eq(dances.counts, filter.counts));
+	if (filter.walls) where.push(eq(dances.walls, filter.walls));
 	if (filter.tempo) where.push(lte(dances.bpmMin, filter.tempo), gte(dances.bpmMax, filter.tempo));
 	return db()
 		.select()
