@@ -75,6 +75,8 @@ async function inviteAndJoin(page: Page, browser: Browser, name: string, email: 
 	const body = await message.locator('pre').innerText();
 	const link = body.match(/https?:\/\/\S+\/invite\/\S+/)?.[0];
 	expect(link, 'the invitation e-mail carries a link').toBeTruthy();
+	// The link in the message can be opened from the outbox (issue 15).
+	await expect(message.locator('pre a', { hasText: '/invite/' })).toHaveAttribute('href', link!);
 
 	const guest = await browser.newPage();
 	await guest.goto(link!);
