@@ -246,6 +246,34 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	await other.close();
 });
 
+test('an admin sees invitations not yet used, sends one again and cancels it', async ({ page }) => {
+	const email = `pending-${Date.now()}@floorset.test`;
+	await signIn(page, 'admin');
+	await page.goto('/admin/people');
+	await hydrated(page);
+	await page.getByLabel('Name').fill('Ottoline Pending');
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByRole('button', { name: 'Send invitation' }).click();
+	await expect(page.getByRole('status')).toContainText(`Invitation sent to ${email}`);
+	const row = page.getByTestId('pending').filter({ hasText: email });
+	await expect(row).toContainText('The link works until');
+	await row.getByRole('button', { name: 'Send again' }).click();
+	await expect(page.getByRole('status')).toContainText(`Sent again to ${email}`);
+	await row.getByRole('button', { name: 'Cancel the invitation' }).click();
+	await expect(page.getByTestId('pending').filter({ hasText: email })).toHaveCount(0);
+	// Two messages went out, and the newer link no longer opens.
+	await page.goto('/admin/outbox');
+	await hydrated(page);
+	const sent = page.getByTestId('outbox-message').filter({ hasText: email });
+	await expect(sent).toHaveCount(2);
+	await sent.first().locator('summary').click();
+	const link = /https?:\/\/\S+\/invite\/\S+/.exec(
+		await sent.first().locator('pre').innerText()
+	)![0];
+	const answer = await page.request.get(link);
+	expect(await answer.text()).toMatch(/no longer valid|not valid|expired/i);
+});
+
 test('the safe floors page is open to everyone and cites the WHO standard', async ({ page }) => {
 	await page.goto('/');
 	await hydrated(page);

@@ -77,6 +77,8 @@ export const ACTIONS: ActionRow[] = [
 	{ route: '/admin/people', action: 'invite', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'roles', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'withdraw', path: '/admin/people', allowed: ['admin'] },
+	{ route: '/admin/people', action: 'resend', path: '/admin/people', allowed: ['admin'] },
+	{ route: '/admin/people', action: 'cancel', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/dances/new', action: 'save', path: '/dances/new', allowed: ['instructor'] },
 	{
 		route: '/dances/[id=id]/edit',

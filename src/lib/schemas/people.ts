@@ -26,3 +26,10 @@ export const withdrawSchema = z.object({
 		.int('Choose a person.')
 		.positive('Choose a person.')
 });
+
+export const invitationIdSchema = z.object({
+	id: z.coerce
+		.number({ error: 'Choose an invitation.' })
+		.int('Choose an invitation.')
+		.positive('Choose an invitation.')
+});

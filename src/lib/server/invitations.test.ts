@@ -2,10 +2,13 @@ import { afterEach, beforeEach, expect, test } from 'vitest';
 import { outbox } from './db/schema';
 import {
 	acceptInvitation,
+	cancelInvitation,
 	findOpenInvitation,
 	INVITATION_DAYS,
 	invite,
-	InvitationError
+	InvitationError,
+	pendingInvitations,
+	resendInvitation
 } from './invitations';
 import { startCatcher } from './mail/catcher';
 import { verifyPassword } from './passwords';
@@ -132,4 +135,33 @@ test('withdrawn access ends the session at once, voids an unused link, and a new
 	expect(sessionUser(dj.id, after)?.roles).toEqual(['instructor']);
 	// A session from before the withdrawal stays worthless once access is given back.
 	expect(sessionUser(dj.id, before)).toBeNull();
+});
+
+test('pending invitations are listed; resent, the old link dies and the new one works; cancelled, none does', async () => {
+	const admin = makeAdmin();
+	const { link: first } = await invite({
+		email: 'wren@floorset.test',
+		name: 'Wren Ashby',
+		roles: ['dancer'],
+		invitedBy: admin.id
+	});
+	const [pending] = pendingInvitations();
+	expect(pending).toMatchObject({
+		email: 'wren@floorset.test',
+		name: 'Wren Ashby',
+		expired: false
+	});
+	expect(await resendInvitation(pending.id)).toBe(true);
+	const mail = t.db.select().from(outbox).all();
+	expect(mail).toHaveLength(2);
+	const second = /https?:\/\/\S+\/invite\/\S+/.exec(mail[1].text)![0];
+	expect(second).not.toBe(first);
+	expect(findOpenInvitation(tokenOf(first))).toBeNull();
+	expect(findOpenInvitation(tokenOf(second))).not.toBeNull();
+
+	expect(cancelInvitation(pending.id)).toBe(true);
+	expect(findOpenInvitation(tokenOf(second))).toBeNull();
+	expect(pendingInvitations()).toEqual([]);
+	expect(cancelInvitation(pending.id)).toBe(false);
+	expect(await resendInvitation(pending.id)).toBe(false);
 });

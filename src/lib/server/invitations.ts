@@ -1,5 +1,5 @@
 // One-time invitation links: the token is only in the e-mail; we keep its SHA-256.
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import type { Role } from '../domain';
 import { config } from './config';
 import { db } from './db';
@@ -36,21 +36,84 @@ export async function invite(input: {
 			expiresAt: new Date(now + INVITATION_DAYS * 86_400_000)
 		})
 		.run();
+	return { link: await mailInvitation(email, input.name, input.roles, token) };
+}
+
+async function mailInvitation(
+	email: string,
+	name: string,
+	roles: readonly string[],
+	token: string
+) {
 	const link = `${config().origin}/invite/${token}`;
 	await sendMail({
 		to: email,
 		subject: 'You are invited to Floorset',
 		text: [
-			`Hello ${input.name},`,
+			`Hello ${name},`,
 			'',
-			`You have been invited to your dance team's Floorset as: ${input.roles.join(', ')}.`,
+			`You have been invited to your dance team's Floorset as: ${roles.join(', ')}.`,
 			`Set your password here (the link works once, for ${INVITATION_DAYS} days):`,
 			link,
 			'',
 			'If you were not expecting this, you can ignore this message.'
 		].join('\n')
 	});
-	return { link };
+	return link;
+}
+
+export interface PendingInvitation {
+	id: number;
+	email: string;
+	name: string;
+	roles: string[];
+	expiresAt: string;
+	expired: boolean;
+}
+
+/** Invitations not yet used, newest first; expired ones too, so they can be sent again. */
+export function pendingInvitations(now = Date.now()): PendingInvitation[] {
+	return db()
+		.select()
+		.from(invitations)
+		.where(isNull(invitations.acceptedAt))
+		.orderBy(desc(invitations.createdAt), desc(invitations.id))
+		.all()
+		.map((i) => ({
+			id: i.id,
+			email: i.email,
+			name: i.name,
+			roles: i.roles,
+			expiresAt: i.expiresAt.toISOString(),
+			expired: i.expiresAt.getTime() <= now
+		}));
+}
+
+/**
+ * Sends an unused invitation again with a new link and a new week; the old link stops
+ * working. False when there is no such unused invitation.
+ */
+export async function resendInvitation(id: number, now = Date.now()): Promise<boolean> {
+	const { token, hash } = newToken();
+	const row = db()
+		.update(invitations)
+		.set({ tokenHash: hash, expiresAt: new Date(now + INVITATION_DAYS * 86_400_000) })
+		.where(and(eq(invitations.id, id), isNull(invitations.acceptedAt)))
+		.returning()
+		.get();
+	if (!row) return false;
+	await mailInvitation(row.email, row.name, row.roles, token);
+	return true;
+}
+
+/** Withdraws an unused invitation: its link stops working. */
+export function cancelInvitation(id: number): boolean {
+	const row = db()
+		.delete(invitations)
+		.where(and(eq(invitations.id, id), isNull(invitations.acceptedAt)))
+		.returning({ id: invitations.id })
+		.get();
+	return !!row;
 }
 
 /** The open invitation behind a token, or null when it is unknown, used or expired. */

@@ -1,13 +1,19 @@
 import { fail } from '@sveltejs/kit';
 import { requireRight } from '$lib/server/guard';
-import { invite, InvitationError } from '$lib/server/invitations';
+import {
+	cancelInvitation,
+	invite,
+	InvitationError,
+	pendingInvitations,
+	resendInvitation
+} from '$lib/server/invitations';
 import { listPeople, setRoles, withdrawAccess } from '$lib/server/users';
-import { inviteSchema, rolesSchema, withdrawSchema } from '$lib/schemas/people';
+import { invitationIdSchema, inviteSchema, rolesSchema, withdrawSchema } from '$lib/schemas/people';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = ((event) => {
 	requireRight(event, 'people');
-	return { people: listPeople() };
+	return { people: listPeople(), pending: pendingInvitations() };
 }) satisfies PageServerLoad;
 
 export const actions = {
@@ -61,5 +67,22 @@ export const actions = {
 			return fail(404, { rolesMessage: 'There is no such person.' });
 		}
 		return { withdrawn: parsed.data.userId };
+	},
+	resend: async (event) => {
+		requireRight(event, 'people');
+		const parsed = invitationIdSchema.safeParse({ id: (await event.request.formData()).get('id') });
+		if (!parsed.success) return fail(400, { invitationMessage: parsed.error.issues[0]?.message });
+		const pending = pendingInvitations().find((i) => i.id === parsed.data.id);
+		if (!pending || !(await resendInvitation(parsed.data.id)))
+			return fail(404, { invitationMessage: 'That invitation has been used or cancelled.' });
+		return { resent: pending.email };
+	},
+	cancel: async (event) => {
+		requireRight(event, 'people');
+		const parsed = invitationIdSchema.safeParse({ id: (await event.request.formData()).get('id') });
+		if (!parsed.success) return fail(400, { invitationMessage: parsed.error.issues[0]?.message });
+		if (!cancelInvitation(parsed.data.id))
+			return fail(404, { invitationMessage: 'That invitation has been used or cancelled.' });
+		return { cancelled: parsed.data.id };
 	}
 } satisfies Actions;
