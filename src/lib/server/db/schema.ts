@@ -11,6 +11,7 @@ import {
 	text,
 	uniqueIndex
 } from 'drizzle-orm/sqlite-core';
+import type { PlanSettingsInput } from '../../schemas/evening';
 import {
 	CROWD_MIXES,
 	ENTRY_KINDS,
@@ -19,7 +20,8 @@ import {
 	ROLES,
 	SECTION_KINDS,
 	TEMPO_SOURCES,
-	VERDICTS
+	VERDICTS,
+	type PhraseEvent
 } from '../../domain';
 
 /** A CHECK list from one of domain.ts's lists (our own constants, never input). */
@@ -208,17 +210,7 @@ export const dances = sqliteTable(
 		turn: text('turn', { enum: ['left', 'right'] }),
 		formation: text('formation', { enum: FORMATIONS }).notNull().default('line'),
 		/** Tags and restarts: JSON PhraseEvent[] (see src/lib/domain.ts). */
-		events: text('events', { mode: 'json' })
-			.$type<
-				{
-					kind: 'tag' | 'restart';
-					repetition: number;
-					afterCount: number;
-					lengthCounts: number;
-				}[]
-			>()
-			.notNull()
-			.default([]),
+		events: text('events', { mode: 'json' }).$type<PhraseEvent[]>().notNull().default([]),
 		notes: text('notes').notNull().default(''),
 		choreographer: text('choreographer').notNull().default(''),
 		/** A dance most of the floor knows: a good last dance. */
@@ -283,9 +275,9 @@ export const evenings = sqliteTable(
 			.default('draft'),
 		/** Random token of the public page; null when not published. */
 		shareToken: text('share_token').unique(),
-		/** Planner settings and must-play / never-play lists (JSON). */
+		/** Planner settings and must-play / never-play lists (JSON), read through planSettingsInput. */
 		planSettings: text('plan_settings', { mode: 'json' })
-			.$type<Record<string, unknown>>()
+			.$type<PlanSettingsInput>()
 			.notNull()
 			.default({}),
 		/** Bumped by every run-order save, so a stale save is refused (409). */

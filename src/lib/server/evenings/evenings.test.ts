@@ -1,6 +1,7 @@
 // Integration tests of evenings against a real SQLite (makeTestDb, real migrations).
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import { eveningCreate, eveningPatch } from '../../schemas/evening';
+import { db } from '../db';
 import { makeTestDb } from '../testing/test-db';
 import { EveningError } from './errors';
 import { listEvenings, loadEvening } from './load';
@@ -98,6 +99,17 @@ describe('evening CRUD', () => {
 			refusal(() => updateEvening(id, eveningPatch.parse({ notes: 'second', version: 1 }))).status
 		).toBe(409);
 		expect(loadEvening(id)!.notes).toBe('first');
+	});
+
+	test('planner settings are read once: typed when valid, the defaults when not', () => {
+		const settings = { mustPlay: [2, { danceId: 3 }], settings: { gapS: 12 } };
+		const id = createEvening(eveningCreate.parse({ ...base, planSettings: settings }), null);
+		expect(loadEvening(id)!.planSettings).toEqual(settings);
+		// A value no write would store (a hand edit, an older build) is not passed on half-read.
+		db()
+			.$client.prepare('UPDATE evenings SET plan_settings = ? WHERE id = ?')
+			.run(JSON.stringify({ settings: { gapS: 'long' } }), id);
+		expect(loadEvening(id)!.planSettings).toEqual({});
 	});
 });
 

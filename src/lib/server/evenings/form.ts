@@ -144,12 +144,8 @@ export function readEveningForm(
 export function valuesOf(e: EveningJson): EveningValues {
 	const tz = e.timeZone;
 	const wall = (iso: string) => toWall(Date.parse(iso), tz);
-	const ps = e.planSettings as {
-		mustPlay?: unknown[];
-		neverPlay?: { danceIds?: unknown[] };
-		settings?: { breakEveryMin?: unknown; partnerEvery?: unknown; partnerBackToBack?: unknown };
-	};
-	const rest = Number(ps.settings?.breakEveryMin ?? 0);
+	const ps = e.planSettings;
+	const rest = ps.settings?.breakEveryMin ?? 0;
 	return {
 		title: e.title,
 		venue: e.venue,
@@ -167,10 +163,8 @@ export function valuesOf(e: EveningJson): EveningValues {
 			danceId: s.danceId ?? undefined,
 			teacherId: s.teacherId ?? undefined
 		})),
-		mustPlay: (ps.mustPlay ?? []).map((m) =>
-			typeof m === 'number' ? m : Number((m as { danceId?: number }).danceId)
-		),
-		neverPlay: (ps.neverPlay?.danceIds ?? []).map(Number),
+		mustPlay: (ps.mustPlay ?? []).map((m) => (typeof m === 'number' ? m : m.danceId)),
+		neverPlay: ps.neverPlay?.danceIds ?? [],
 		restEveryMin: rest > 0 ? String(rest) : '',
 		partnerEvery: String(ps.settings?.partnerEvery ?? DEFAULT_SETTINGS.partnerEvery),
 		partnerBackToBack: ps.settings?.partnerBackToBack === true

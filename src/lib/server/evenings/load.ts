@@ -5,7 +5,17 @@ import type { CrowdMix, EntryKind, Formation, Level, Rhythm, SectionKind } from 
 import { db } from '../db';
 import { preparedFor } from '../db/prepared';
 import { dances, evenings, runOrderEntries, sections, tracks, users } from '../db/schema';
+import { planSettingsInput, type PlanSettingsInput } from '../../schemas/evening';
 import { clubTimeZone } from './timezone';
+
+/**
+ * The stored planner settings, read once here. Every write validates them, so a value this
+ * rejects comes from an older build or a hand edit: the planner then runs on its defaults.
+ */
+function readPlanSettings(stored: unknown): PlanSettingsInput {
+	const parsed = planSettingsInput.safeParse(stored);
+	return parsed.success ? parsed.data : {};
+}
 
 export interface SectionJson {
 	id: number;
@@ -62,7 +72,7 @@ export interface EveningSummary {
 export interface EveningJson extends Omit<EveningSummary, 'entryCount'> {
 	notes: string;
 	shareToken: string | null;
-	planSettings: Record<string, unknown>;
+	planSettings: PlanSettingsInput;
 	runOrderVersion: number;
 	version: number;
 	/** The club's IANA time zone: show these instants in it. */
@@ -176,7 +186,7 @@ export function loadEvening(id: number): EveningJson | null {
 		published: row.status === 'published',
 		notes: row.notes,
 		shareToken: row.shareToken,
-		planSettings: row.planSettings,
+		planSettings: readPlanSettings(row.planSettings),
 		runOrderVersion: row.runOrderVersion,
 		version: row.version,
 		timeZone: clubTimeZone(),

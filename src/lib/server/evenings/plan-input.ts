@@ -5,7 +5,7 @@ import { and, eq, inArray, isNotNull } from 'drizzle-orm';
 import { DEFAULT_DURATION_S, recomputeStarts } from '../../run-order/timing';
 import { rankFits } from '../../fit';
 import type { LockedEntry, PlanFit, PlanInput } from '../../planner';
-import { planSettingsInput, type EntryInput } from '../../schemas/evening';
+import type { EntryInput } from '../../schemas/evening';
 import { db } from '../db';
 import { requests } from '../db/schema';
 import { danceFacts, playable, readCatalogue, trackFacts, verdictsOfDance } from './catalogue';
@@ -103,8 +103,7 @@ export function planInputFor(eveningId: number, seed?: number, draft?: Draft): P
 	if (!evening) throw new EveningError('There is no such evening.', 404);
 	const start = Date.parse(evening.startsAt);
 	const cat = readCatalogue();
-	const parsedSettings = planSettingsInput.safeParse(evening.planSettings);
-	const ps = parsedSettings.success ? parsedSettings.data : {};
+	const ps = evening.planSettings;
 	const sectionStarts = evening.sections.map((s) => ({
 		id: s.id,
 		startS: (Date.parse(s.startsAt) - start) / 1000

@@ -29,10 +29,7 @@ export const actions = {
 		const read = readEveningForm(form);
 		if (!read.ok) return fail(400, { values: read.values, message: read.message });
 		const version = Number(form.get('version')) || undefined;
-		const ps = current.planSettings as {
-			neverPlay?: Record<string, unknown>;
-			settings?: Record<string, unknown>;
-		};
+		const ps = current.planSettings;
 		try {
 			updateEvening(id, {
 				...read.input,
