@@ -48,12 +48,13 @@ export function rolesOf(userId: number): Role[] {
 export const passwordStamp = (passwordHash: string) =>
 	createHash('sha256').update(passwordHash).digest('base64url').slice(0, 22);
 
-// Who is signed in, kept until the database next changes (a role given or taken is a change).
+// Who is signed in, kept until an account or a role is next written (a password change included).
+const WHO = ['users', 'user_roles'] as const;
 const signedIn = new StampedCache<{ user: SessionUser; stamp: string } | null>(10_000, () => 1);
 
 /** The person a session names, or null when they have no way in or the session predates their password. */
 export function sessionUser(userId: number, stamp: string | null): SessionUser | null {
-	const known = signedIn.through(String(userId), changeStamp(db().$client), () =>
+	const known = signedIn.through(String(userId), changeStamp(db().$client, WHO), () =>
 		readSessionUser(userId)
 	);
 	return known && known.stamp === stamp ? known.user : null;

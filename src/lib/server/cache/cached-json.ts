@@ -1,12 +1,25 @@
 // JSON answers that depend only on the database and the request's own words (not on who asks,
-// once the route's right is checked), kept until the next write. Many people open the same
+// once the route's right is checked), kept until the next write to the tables they read. Many people open the same
 // music table and the same dance's fits; each ranking or page is computed once per change.
 import { db } from '../db';
-import { changeStamp } from './change-stamp';
+import { changeStamp, type CountedTable } from './change-stamp';
 import { CachedBody } from './cached-body';
 import { StampedCache } from './stamped-cache';
 
 const encoder = new TextEncoder();
+
+/** What the kept answers read: the library, the catalogue, the fits and the evenings. */
+export const CONTENT_TABLES: readonly CountedTable[] = [
+	'users',
+	'tracks',
+	'dances',
+	'fits',
+	'settings',
+	'evenings',
+	'sections',
+	'run_order_entries',
+	'requests'
+];
 
 /** 32 MB of kept answers at most: a few hundred music-table pages. */
 export const jsonCache = new StampedCache<CachedBody>(32 * 1024 * 1024);
@@ -16,7 +29,7 @@ export const jsonCache = new StampedCache<CachedBody>(32 * 1024 * 1024);
  * kept) when `compute` finds nothing to answer, so the route can say what is missing.
  */
 export function cachedJson(request: Request, key: string, compute: () => unknown): Response | null {
-	const stamp = changeStamp(db().$client);
+	const stamp = changeStamp(db().$client, CONTENT_TABLES);
 	let body = jsonCache.get(key, stamp);
 	if (!body) {
 		const value = compute();

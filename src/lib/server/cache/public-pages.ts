@@ -1,6 +1,6 @@
 // A published evening's page is read by a hall full of dancers scanning the same QR code, nearly
 // all signed out, and every one of them gets the same page. That page is rendered once per
-// database change and then served as it was. Only signed-out GETs of the public evening pages
+// change to the tables it reads and then served as it was. Only signed-out GETs of the public evening pages
 // are kept (no session cookie, no query), and only when no write overlapped the rendering. The
 // Content-Security-Policy uses hashes (svelte.config.js), not a per-response nonce, so a page
 // served twice weakens nothing.
@@ -10,6 +10,7 @@ import { db } from '../db';
 import { clearing, sessionCookieNames } from '../session-cookie';
 import { changeStamp } from './change-stamp';
 import { CachedBody } from './cached-body';
+import { CONTENT_TABLES } from './cached-json';
 import { StampedCache } from './stamped-cache';
 
 interface CachedPage {
@@ -46,7 +47,7 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 	// password change). The kept page is served all the same, and the answer deletes the cookie.
 	const unreadable = sessionCookieNames(event.cookies);
 	const key = event.url.pathname;
-	const stamp = changeStamp(db().$client);
+	const stamp = changeStamp(db().$client, CONTENT_TABLES);
 	const kept = publicPages.get(key, stamp);
 	if (kept) return withCookies(replay(kept, event.request), clearing(unreadable));
 	// When the QR code goes up, a hundred phones ask at once: one renders, the rest wait for it.
@@ -69,7 +70,7 @@ export const cachePublicPages: Handle = async ({ event, resolve }) => {
 			response.status !== 200 ||
 			!cookies.every((c) => /^(__Secure-)?authjs\./.test(c)) ||
 			!response.headers.get('content-type')?.startsWith('text/html') ||
-			changeStamp(db().$client) !== stamp
+			changeStamp(db().$client, CONTENT_TABLES) !== stamp
 		) {
 			return response;
 		}

@@ -391,3 +391,14 @@ export const settings = sqliteTable('settings', {
 	value: text('value', { mode: 'json' }).notNull(),
 	updatedAt: updatedAt()
 });
+
+/**
+ * One counter per table that a cache holds, bumped by triggers (migration 0007) on every insert,
+ * update and delete, by whichever code path or connection writes. A cache reads the counters of
+ * the tables it holds (cache/change-stamp.ts), so a write elsewhere (a failed sign-in, the
+ * outbox) leaves it be.
+ */
+export const dataChanges = sqliteTable('data_changes', {
+	tableName: text('table_name').primaryKey(),
+	version: integer('version').notNull().default(0)
+});
