@@ -1,21 +1,13 @@
 // The browser's side of the tracks API: load every page, save an edit with its version, mark a
-// fit. Plain fetch, no framework, so the page, the track page and the table share it.
+// fit, through the one API helper, so the page, the track page and the table share it.
+import { api, ApiError } from '../api-client';
 import type { TrackJson, TrackPage } from './track-types';
 
-export class ApiError extends Error {
-	constructor(
-		message: string,
-		readonly status: number,
-		readonly current?: TrackJson
-	) {
-		super(message);
-	}
-}
+export { ApiError };
 
-async function failure(res: Response): Promise<ApiError> {
-	const body = (await res.json().catch(() => ({}))) as { error?: string; current?: TrackJson };
-	return new ApiError(body.error ?? `The server answered ${res.status}.`, res.status, body.current);
-}
+/** On a refused save (409), the track as it is saved now, sent with the refusal. */
+export const trackOnConflict = (e: unknown): TrackJson | undefined =>
+	e instanceof ApiError && e.status === 409 ? (e.body.current as TrackJson | undefined) : undefined;
 
 /** Every track matching `query`, page by page (500 a page, the API's most). */
 export async function fetchAllTracks(
@@ -28,9 +20,7 @@ export async function fetchAllTracks(
 	do {
 		const params = new URLSearchParams({ ...query, limit: '500', sort: 'title' });
 		if (cursor) params.set('cursor', cursor);
-		const res = await fetch(`/api/tracks?${params}`, { signal });
-		if (!res.ok) throw await failure(res);
-		const page = (await res.json()) as TrackPage;
+		const page = await api<TrackPage>(`/api/tracks?${params}`, { signal });
 		all.push(...page.items);
 		onPage?.(page.items, page.total);
 		cursor = page.nextCursor;
@@ -59,13 +49,11 @@ export async function patchTrack(
 	track: Pick<TrackJson, 'id' | 'version'>,
 	changes: TrackChanges
 ): Promise<TrackJson> {
-	const res = await fetch(`/api/tracks/${track.id}`, {
+	const saved = await api<{ track: TrackJson }>(`/api/tracks/${track.id}`, {
 		method: 'PATCH',
-		headers: { 'content-type': 'application/json' },
-		body: JSON.stringify({ ...changes, version: track.version })
+		body: { ...changes, version: track.version }
 	});
-	if (!res.ok) throw await failure(res);
-	return ((await res.json()) as { track: TrackJson }).track;
+	return saved.track;
 }
 
 /** The team's verdict for a track and a dance (PUT /api/fits, the fits feature's endpoint). */
@@ -76,12 +64,7 @@ export async function putFit(body: {
 	rate?: number;
 	notes?: string;
 }): Promise<void> {
-	const res = await fetch('/api/fits', {
-		method: 'PUT',
-		headers: { 'content-type': 'application/json' },
-		body: JSON.stringify(body)
-	});
-	if (!res.ok) throw await failure(res);
+	await api('/api/fits', { method: 'PUT', body });
 }
 
 /**

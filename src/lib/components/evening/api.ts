@@ -1,4 +1,5 @@
 // The editor's calls to the evenings API, with the answers it needs.
+import { api, ApiError } from '../../api-client';
 import type { EntryData } from './draft.svelte';
 
 export interface PlanAnswer {
@@ -24,35 +25,26 @@ export interface Suggestion {
 
 type Answer<T> = { ok: true; data: T } | { ok: false; status: number; error: string };
 
-async function call<T>(url: string, init?: RequestInit): Promise<Answer<T>> {
-	let res: Response;
+/** The editor reads every answer as a result rather than a throw: it shows refusals in place. */
+async function call<T>(url: string, init?: { method: string; body: unknown }): Promise<Answer<T>> {
 	try {
-		res = await fetch(url, {
-			...init,
-			headers: { 'content-type': 'application/json', accept: 'application/json' }
-		});
-	} catch {
-		return {
-			ok: false,
-			status: 0,
-			error: 'The server could not be reached. Check the connection.'
-		};
+		return { ok: true, data: await api<T>(url, init) };
+	} catch (e) {
+		if (e instanceof ApiError) return { ok: false, status: e.status, error: e.message };
+		throw e;
 	}
-	const body = await res.json().catch(() => ({}));
-	if (!res.ok) return { ok: false, status: res.status, error: body.error ?? `Error ${res.status}` };
-	return { ok: true, data: body as T };
 }
 
 export const planEvening = (id: number, seed: number, entries: unknown[]) =>
 	call<PlanAnswer>(`/api/evenings/${id}/plan`, {
 		method: 'POST',
-		body: JSON.stringify({ seed, entries })
+		body: { seed, entries }
 	});
 
 export const saveRunOrder = (id: number, version: number, entries: unknown[]) =>
 	call<{ runOrderVersion: number; entries: EntryData[] }>(`/api/evenings/${id}/run-order`, {
 		method: 'PUT',
-		body: JSON.stringify({ version, entries })
+		body: { version, entries }
 	});
 
 export const loadRunOrder = (id: number) =>
