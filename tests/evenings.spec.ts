@@ -19,6 +19,14 @@ async function entryNames(page: Page) {
 	return page.getByTestId('entry-name').allTextContents();
 }
 
+/** The same, signed in as the organiser through a context of its own. */
+async function ensureDemoRunOrder() {
+	const api = await newRequest.newContext({ baseURL: BASE });
+	await signInApi(api, 'organiser');
+	await ensureRunOrder(api);
+	await api.dispose();
+}
+
 /** Plans evening 1 and saves it through the API when it has no run order yet. */
 async function ensureRunOrder(api: APIRequestContext) {
 	const current = await (await api.get('/api/evenings/1/run-order')).json();
@@ -56,9 +64,9 @@ test('the organiser plans the demo evening, drags and locks an entry, re-plans a
 	const moving = planned[k];
 	const handle = rows.nth(k).getByLabel(/^Drag /);
 	const target = rows.nth(k + 2);
-	// Bring both rows into the viewport: the mouse only reaches what is on screen.
-	await target.scrollIntoViewIfNeeded();
-	await handle.scrollIntoViewIfNeeded();
+	// Both rows in the middle of the viewport: the mouse only reaches what is on screen, and
+	// near an edge the library scrolls the page under a held drag (compact rows sit close).
+	await rows.nth(k + 1).evaluate((el) => el.scrollIntoView({ block: 'center' }));
 	const from = (await handle.boundingBox())!;
 	const to = (await target.boundingBox())!;
 	await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
@@ -95,6 +103,8 @@ test('the organiser plans the demo evening, drags and locks an entry, re-plans a
 	await expect(locked.locator('p').nth(1)).toHaveText(track!);
 	// The planner keeps a lock at its start time (entries before it may change in number).
 	await expect(locked.getByTestId('entry-time')).toHaveText(time!);
+	// The reasons open under the row.
+	await locked.getByRole('button', { name: /^More for/ }).click();
 	await expect(locked).toContainText('locked by the team');
 
 	await page.getByRole('button', { name: 'Keep this plan' }).click();
@@ -201,10 +211,7 @@ test('a dancer sees only published evenings and cannot change them', async ({ pa
 test('the desk view shows the current entry, the section time left and the sound caution', async ({
 	page
 }) => {
-	const api = await newRequest.newContext({ baseURL: BASE });
-	await signInApi(api, 'organiser');
-	await ensureRunOrder(api);
-	await api.dispose();
+	await ensureDemoRunOrder();
 	// 19:20 on the demo evening (in December London is on UTC): twenty minutes into the lesson.
 	await page.clock.setFixedTime(new Date('2026-12-11T19:20:00Z'));
 	await signIn(page, 'dj');
@@ -330,17 +337,17 @@ test('the organiser creates, edits and deletes an evening through the forms', as
 test('swap a track for another that fits the same dance, insert and remove entries', async ({
 	page
 }) => {
-	const api = await newRequest.newContext({ baseURL: BASE });
-	await signInApi(api, 'organiser');
-	await ensureRunOrder(api);
-	await api.dispose();
+	await ensureDemoRunOrder();
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
 	await hydrated(page);
 	const rows = page.getByTestId('entry');
 	const count = await rows.count();
-	const dance = rows.filter({ has: page.getByRole('button', { name: /^Swap track/ }) }).nth(2);
-	const before = await dance.locator('p').nth(1).textContent();
+	const dance = page.locator('[data-testid="entry"][data-kind="dance"]').nth(2);
+	const detail = dance.getByTestId('entry-detail');
+	const before = await detail.textContent();
+	// The rarer actions open under the row.
+	await dance.getByRole('button', { name: /^More for/ }).click();
 	await dance.getByRole('button', { name: /^Swap track/ }).click();
 	const offers = page.getByRole('button', { name: /^Use / });
 	await expect(offers.first()).toBeVisible();
@@ -353,8 +360,8 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	if (plain > 0) await expect(offers.first()).not.toHaveText(/^Use anyway /);
 	const choice = (await offers.first().textContent())!.replace(/^Use (anyway )?/, '');
 	await offers.first().click();
-	await expect(dance.locator('p').nth(1)).not.toHaveText(before!);
-	await expect(dance.locator('p').nth(1)).toContainText(choice);
+	await expect(detail).not.toHaveText(before!);
+	await expect(detail).toContainText(choice);
 	await expect(dance).toContainText('track chosen by hand from the fit ranking');
 
 	// An announcement added at the end, then a removal: the count follows.
@@ -363,6 +370,10 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await page.getByRole('button', { name: 'Add', exact: true }).click();
 	await expect(rows).toHaveCount(count + 1);
 	await expect(rows.last()).toContainText('Announcement: Raffle at the break');
+	await rows
+		.first()
+		.getByRole('button', { name: /^More for/ })
+		.click();
 	await rows
 		.first()
 		.getByRole('button', { name: /^Remove/ })
@@ -377,10 +388,7 @@ test('swap a track for another that fits the same dance, insert and remove entri
 
 /** The demo evening's run order, open for the organiser, and an entry whose dance is there once. */
 async function openRunOrderAtAUniqueEntry(page: Page) {
-	const api = await newRequest.newContext({ baseURL: BASE });
-	await signInApi(api, 'organiser');
-	await ensureRunOrder(api);
-	await api.dispose();
+	await ensureDemoRunOrder();
 	await signIn(page, 'organiser');
 	await page.goto('/evenings/1');
 	await hydrated(page);
@@ -494,4 +502,41 @@ test('the tempo and level charts share one time axis; on a phone the time labels
 	const boxes = await Promise.all((await labels.all()).map((l) => l.boundingBox()));
 	const spans = boxes.map((b) => [b!.x, b!.x + b!.width]).sort((a, b) => a[0] - b[0]);
 	for (let i = 1; i < spans.length; i++) expect(spans[i][0]).toBeGreaterThan(spans[i - 1][1]);
+});
+
+// Issue 15, "Compact and phone-sized": a 50-entry night under 4,000 px at 1366 × 800, each entry
+// at most 120 px tall at 390 × 844. Measured from the rendered page, on the demo night.
+test('the run order stays compact: under 4,000 px for 50 entries, each entry low on a phone', async ({
+	page
+}) => {
+	await ensureDemoRunOrder();
+	await page.setViewportSize({ width: 1366, height: 800 });
+	await signIn(page, 'organiser');
+	await page.goto('/evenings/1');
+	await hydrated(page);
+	const rows = page.getByTestId('entry');
+	const count = await rows.count();
+	expect(count).toBeGreaterThanOrEqual(40);
+	const pageHeight = () => page.evaluate(() => document.documentElement.scrollHeight);
+	// Scaled to 50 entries when the demo night has another number.
+	const listBox = (await page.getByRole('list', { name: 'Run order' }).boundingBox())!;
+	const scaled = (await pageHeight()) - listBox.height + (listBox.height / count) * 50;
+	expect(scaled).toBeLessThan(4000);
+
+	await page.setViewportSize({ width: 390, height: 844 });
+	const heights = await rows.evaluateAll((els) => els.map((e) => e.getBoundingClientRect().height));
+	expect(Math.max(...heights)).toBeLessThanOrEqual(120);
+	// Nothing sideways: the page is no wider than the phone.
+	expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+	// The actions are a tap away: open, then move the entry down.
+	const first = await page.getByTestId('entry-name').first().textContent();
+	await rows
+		.first()
+		.getByRole('button', { name: /^More for/ })
+		.click();
+	await rows.first().getByRole('button', { name: /^Down/ }).click();
+	await expect(page.getByTestId('entry-name').nth(1)).toHaveText(first!);
+	console.log(
+		`run order: ${count} entries, page ${Math.round(scaled)} px for 50 at 1366; tallest entry ${Math.max(...heights)} px at 390`
+	);
 });

@@ -598,6 +598,7 @@ test('a signed-in dancer opening a published evening gets the dancers’ page an
 	// Not the team's view: no desk link, no planner reasons.
 	await expect(page.getByRole('link', { name: /desk/i })).toHaveCount(0);
 	await expect(page.getByText('Why this')).toHaveCount(0);
+	await expect(page.getByRole('button', { name: /^More for/ })).toHaveCount(0);
 });
 
 test('a request answered with a track: the asker and the floor read the answer', async ({
