@@ -322,4 +322,77 @@ test('an instructor reads the music but cannot change it', async ({ page }) => {
 	await expect(page.getByRole('button', { name: 'Tap', exact: true })).toHaveCount(0);
 	await expect(page.getByRole('button', { name: 'Save the facts' })).toHaveCount(0);
 	await expect(page.getByTestId('track-dance-fits-slot')).toBeVisible();
+	await expect(page.getByTestId('remove-track')).toHaveCount(0);
+});
+
+test('removing a track says first which evenings and verdicts use it, then asks for a tick', async ({
+	page,
+	playwright
+}) => {
+	// A track of our own, judged for a dance and played in the draft evening (evening 2).
+	const dj = await playwright.request.newContext({ baseURL: BASE });
+	await signInApi(dj, 'dj');
+	const song = generateSong({ bpm: 118, durationS: 6, seed: 31 });
+	const made = await dj.post('/api/tracks', {
+		headers: { origin: BASE },
+		multipart: {
+			file: {
+				name: 'e2e-to-remove.wav',
+				mimeType: 'audio/wav',
+				buffer: Buffer.from(encodeWav(song.samples, song.sampleRate))
+			},
+			analysis: JSON.stringify({
+				bpm: 118,
+				offsetS: 0,
+				confidence: 0.5,
+				source: 'detected',
+				meter: 4
+			})
+		}
+	});
+	expect(made.status()).toBe(201);
+	const { track } = (await made.json()) as { track: { id: number; title: string } };
+	const verdict = await dj.put('/api/fits', {
+		headers: { origin: BASE },
+		data: { trackId: track.id, danceId: 1, verdict: 'fits' }
+	});
+	expect(verdict.status()).toBe(200);
+	const organiser = await playwright.request.newContext({ baseURL: BASE });
+	await signInApi(organiser, 'organiser');
+	const before = await (await organiser.get('/api/evenings/2/run-order')).json();
+	const entry = { kind: 'dance', danceId: 1, trackId: track.id, durationS: 6 };
+	const put = await organiser.put('/api/evenings/2/run-order', {
+		headers: { origin: BASE },
+		data: { version: before.runOrderVersion, entries: [...before.entries, entry] }
+	});
+	expect(put.status(), await put.text()).toBe(200);
+
+	await signIn(page, 'dj');
+	await page.goto(`/music/${track.id}`);
+	await hydrated(page);
+	const panel = page.getByTestId('remove-track');
+	await panel.getByText('Remove this track from the library').click();
+	await expect(panel.getByTestId('remove-track-evenings')).toContainText('New Year Beginners');
+	await expect(panel.getByTestId('remove-track-verdicts')).toContainText(
+		"The team's 1 verdict on it goes with it."
+	);
+	// Without the tick nothing goes.
+	await panel.getByRole('button', { name: 'Remove the track' }).click();
+	await expect(panel.getByRole('alert')).toContainText('Tick the box');
+	expect((await dj.get(`/api/tracks/${track.id}`)).status()).toBe(200);
+	await panel.getByLabel(/Yes, remove it for good/).check();
+	await panel.getByRole('button', { name: 'Remove the track' }).click();
+	await expect(page).toHaveURL(/\/music\?removed=/);
+	await expect(page.getByRole('status').first()).toContainText(`Removed “${track.title}”`);
+	expect((await dj.get(`/api/tracks/${track.id}`)).status()).toBe(404);
+	// The evening keeps its entry, now without a track; then it is put back as it was.
+	const after = await (await organiser.get('/api/evenings/2/run-order')).json();
+	expect(after.entries.at(-1)).toMatchObject({ kind: 'dance', danceId: 1, trackId: null });
+	const restored = await organiser.put('/api/evenings/2/run-order', {
+		headers: { origin: BASE },
+		data: { version: after.runOrderVersion, entries: before.entries }
+	});
+	expect(restored.status()).toBe(200);
+	await dj.dispose();
+	await organiser.dispose();
 });

@@ -79,6 +79,8 @@ export const ACTIONS: ActionRow[] = [
 	{ route: '/admin/people', action: 'withdraw', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'resend', path: '/admin/people', allowed: ['admin'] },
 	{ route: '/admin/people', action: 'cancel', path: '/admin/people', allowed: ['admin'] },
+	// An empty form is refused (400) before anything goes: the box is not ticked.
+	{ route: '/music/[id=id]', action: 'remove', path: '/music/1', allowed: ['dj'] },
 	{ route: '/dances/new', action: 'save', path: '/dances/new', allowed: ['instructor'] },
 	{
 		route: '/dances/[id=id]/edit',
