@@ -242,14 +242,31 @@ test('bulk edit: select the shown rows, set an intro, mark them for a dance, fil
 		items: { introBeats: number }[];
 	};
 	expect(body.items.map((i) => i.introBeats)).toEqual([8, 8, 8]);
-	await request.dispose();
 
 	// The dance filter shows the tracks the team marked for it: the three, and no others
-	// with this search.
+	// with this search, each saying the word is the team's.
 	await page.getByRole('search').getByLabel('Dance').selectOption({ label: danceName });
 	await expect(grid(page).getByTestId('track-row')).toHaveCount(3);
+	await expect(grid(page).getByTestId('fit-word')).toHaveText(Array(3).fill('team’s mark'));
+	// Without the search it adds the tracks the engine finds suitable and nobody judged yet, as
+	// many as the dance's fits list (the API) counts.
+	const danceId = await page.getByRole('search').getByLabel('Dance').inputValue();
+	const fits = (await (await request.get(`/api/dances/${danceId}/fits?limit=10000`)).json()) as {
+		items: { fitting: boolean; verdict: string | null }[];
+	};
+	const computed = fits.items.filter((i) => i.fitting && !i.verdict).length;
+	const team = fits.items.filter((i) => i.fitting && i.verdict).length;
+	await page.getByLabel('Search title, artist, album').fill('');
+	await expect(page.getByTestId('fit-words')).toHaveText(
+		`${team} marked by the team · ${computed} computed from tempo and meter, not judged yet`
+	);
+	await expect(page.getByTestId('library-count')).toHaveText(
+		`${team + computed} of 63 tracks shown`
+	);
+	await page.getByLabel('Search title, artist, album').fill('e2e-');
 	await page.getByRole('search').getByLabel('Verdict').selectOption('does-not-fit');
 	await expect(grid(page).getByTestId('track-row')).toHaveCount(0);
+	await request.dispose();
 });
 
 test('over HTTP: an oversized upload is 413, a hostile name stays text, audio serves ranges', async ({

@@ -5,7 +5,7 @@
 // filters ask the server, because fits are not part of a track's row.
 import { fetchAllTracks } from './tracks-client';
 
-export { trackIdsFor } from './tracks-client';
+export { suitingTracks, trackIdsFor, type FitWord } from './tracks-client';
 import type { TrackJson } from './track-types';
 
 export class TrackLibrary {

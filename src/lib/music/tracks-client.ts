@@ -78,3 +78,19 @@ export async function trackIdsFor(danceId: number | null, verdict: string): Prom
 	const rows = await fetchAllTracks(query);
 	return new Set(rows.map((t) => t.id));
 }
+
+/** Whose word says a track suits a dance: the team's verdict, or the computed fit alone. */
+export type FitWord = 'team' | 'computed';
+
+/**
+ * The tracks that suit a dance, each with whose word says so: the team's verdict where it gave
+ * one ("does not fit" keeps a track out), else the computed fit (tempo, meter, the rate bound).
+ */
+export async function suitingTracks(danceId: number): Promise<Map<number, FitWord>> {
+	const { items } = await api<{
+		items: { track: { id: number }; fitting: boolean; verdict: string | null }[];
+	}>(`/api/dances/${danceId}/fits?limit=10000`);
+	const words = new Map<number, FitWord>();
+	for (const i of items) if (i.fitting) words.set(i.track.id, i.verdict ? 'team' : 'computed');
+	return words;
+}
