@@ -304,3 +304,37 @@ test('a CSV import with a bad row shows the row’s error and writes nothing', a
 	const list = await page.request.get('/api/dances?q=Fernhollow');
 	expect((await list.json()).items).toEqual([]);
 });
+
+// Issue 15: the dance page shows the best few fits as cards and the rest as one-line rows, so
+// a well-served dance is a page, not 8,000 px of cards. Measured from the rendered page.
+test('the dance page: the best five fits as cards, the rest as low rows', async ({ page }) => {
+	await signIn(page, 'dj');
+	// The demo dance with the most fitting tracks among the first ten.
+	let most = { id: 0, n: -1 };
+	for (let id = 1; id <= 10; id++) {
+		const res = await page.request.get(`/api/dances/${id}/fits?limit=30`);
+		if (!res.ok()) continue;
+		const n = ((await res.json()).items as { fitting: boolean }[]).filter((i) => i.fitting).length;
+		if (n > most.n) most = { id, n };
+	}
+	expect(most.n, 'a demo dance with more than five fitting tracks').toBeGreaterThan(5);
+	for (const width of [1366, 390]) {
+		await page.setViewportSize({ width, height: 844 });
+		await page.goto(`/dances/${most.id}`);
+		await hydrated(page);
+		const section = page.getByRole('region', { name: 'Tracks that fit' });
+		await expect(section.locator('li.panel[data-testid="fit-row"]')).toHaveCount(5);
+		await expect(
+			section.getByRole('heading', { name: `${most.n - 5} more that fit` })
+		).toBeVisible();
+		const heights = await section
+			.locator('li:not(.panel)[data-testid="fit-row"]')
+			.evaluateAll((els) => els.map((e) => e.getBoundingClientRect().height));
+		expect(heights.length).toBeGreaterThan(0);
+		// One line and its buttons at 1366; wrapped to a few short lines on a phone.
+		expect(Math.max(...heights)).toBeLessThanOrEqual(width > 1000 ? 90 : 200);
+		expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(
+			width
+		);
+	}
+});
