@@ -44,6 +44,22 @@ export const RHYTHMS = [
 ] as const;
 export type Rhythm = (typeof RHYTHMS)[number];
 
+/** The rhythms as people write them: what every screen and export shows, never the slug. */
+export const RHYTHM_LABELS: Record<Rhythm, string> = {
+	'two-step': 'Two-step',
+	'triple-two-step': 'Triple two-step',
+	'cha-cha': 'Cha-cha',
+	waltz: 'Waltz',
+	'east-coast-swing': 'East coast swing',
+	'west-coast-swing': 'West coast swing',
+	nightclub: 'Nightclub',
+	polka: 'Polka',
+	rumba: 'Rumba',
+	shuffle: 'Shuffle',
+	rock: 'Rock',
+	other: 'Other'
+};
+
 /**
  * How dancers stand (trade terms): each alone in lines, with a partner, or in a circle (mixers
  * included). A country night alternates line dances with partner dances (common practice).

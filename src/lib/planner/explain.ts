@@ -1,6 +1,6 @@
 // Turns the final plan into the public entries, each with the reasons it was chosen, and lists the
 // preferences the plan could not meet, in plain words.
-import { LEVEL_LABELS, LEVELS } from '../domain';
+import { LEVEL_LABELS, LEVELS, RHYTHM_LABELS, type Rhythm } from '../domain';
 import { partnerSettingWords } from './formation';
 import { place, type Placed } from './layout';
 import type { Plan, Problem } from './model';
@@ -8,6 +8,9 @@ import { firstDanceStart, isAfterLesson, isEarly } from './costs';
 import { restSettingWords } from './settings';
 import { minutesWords } from './time';
 import type { PlanEntry } from './types';
+
+/** "east coast swing", as a reason's sentence writes it; an unknown rhythm as it came. */
+const rhythmWords = (r: string) => (RHYTHM_LABELS[r as Rhythm] ?? r).toLowerCase();
 
 const CROWD_WORDS = {
 	'mostly-beginners': 'a crowd of mostly beginners',
@@ -72,7 +75,7 @@ function danceReasons(problem: Problem, p: Placed, prev: Placed | null, ctx: Ctx
 	const prevD =
 		prev?.item.cand && prev.item.kind === 'dance' ? problem.dances[prev.item.cand.dance] : null;
 	if (prevD && prevD.rhythm !== d.rhythm)
-		out.push(`a change of rhythm: ${d.rhythm} after ${prevD.rhythm}`);
+		out.push(`a change of rhythm: ${rhythmWords(d.rhythm)} after ${rhythmWords(prevD.rhythm)}`);
 	if (d.partner && !p.item.lesson)
 		out.push(
 			s.partnerEvery > 0
