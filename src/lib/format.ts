@@ -1,7 +1,44 @@
-// How Floorset writes lengths of time, in one place for the server, the pages and the exports.
+// How Floorset writes lengths of time, clock times and dates, in one place for the server, the
+// pages and the exports. Instants are written in the club's time zone (the caller passes it), in
+// British English: 24-hour clock, day before month.
 
 /** A length in seconds as minutes:seconds, rounded to the second: 215.4 → "3:35", 59.6 → "1:00". */
 export function minutesSeconds(seconds: number): string {
 	const s = Math.max(0, Math.round(seconds));
 	return `${Math.floor(s / 60)}:${String(s % 60).padStart(2, '0')}`;
 }
+
+/** "19:05" for an instant in the club's zone. */
+export function clock(ms: number, timeZone: string): string {
+	return new Intl.DateTimeFormat('en-GB', {
+		timeZone,
+		hour: '2-digit',
+		minute: '2-digit',
+		hourCycle: 'h23'
+	}).format(new Date(ms));
+}
+
+/** "Friday, 11 December 2026" (as Intl writes it) in the club's zone. */
+export function longDate(ms: number, timeZone: string): string {
+	return new Intl.DateTimeFormat('en-GB', {
+		timeZone,
+		weekday: 'long',
+		day: 'numeric',
+		month: 'long',
+		year: 'numeric'
+	}).format(new Date(ms));
+}
+
+/** "4 Dec 2026", in the club's zone. */
+export function shortDate(ms: number, timeZone: string): string {
+	return new Intl.DateTimeFormat('en-GB', {
+		timeZone,
+		day: 'numeric',
+		month: 'short',
+		year: 'numeric'
+	}).format(new Date(ms));
+}
+
+/** "4 Dec 2026, 19:05": when something happened, in the club's zone. */
+export const dateTime = (ms: number, timeZone: string) =>
+	`${shortDate(ms, timeZone)}, ${clock(ms, timeZone)}`;

@@ -22,24 +22,3 @@ export const ENTRY_LABELS: Record<EntryKind, string> = {
 	break: 'Break',
 	announcement: 'Announcement'
 };
-
-/** "19:05" for an instant in the club's zone. */
-export function clock(ms: number, timeZone: string): string {
-	return new Intl.DateTimeFormat('en-GB', {
-		timeZone,
-		hour: '2-digit',
-		minute: '2-digit',
-		hourCycle: 'h23'
-	}).format(new Date(ms));
-}
-
-/** "Friday, 11 December 2026" (as Intl writes it) in the club's zone. */
-export function longDate(ms: number, timeZone: string): string {
-	return new Intl.DateTimeFormat('en-GB', {
-		timeZone,
-		weekday: 'long',
-		day: 'numeric',
-		month: 'long',
-		year: 'numeric'
-	}).format(new Date(ms));
-}
