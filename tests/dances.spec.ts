@@ -53,6 +53,14 @@ test('formation: a partner dance is set in the form, filtered for and served by 
 	await page.goto('/dances?formation=partner&counts=32&walls=4');
 	await expect(page.getByRole('link', { name: NAME })).toBeVisible();
 	await expect(page.getByLabel('Walls')).toHaveValue('4');
+	// Each dance reads as its pattern, in the level it belongs to, its tempo range first.
+	const patterns = await page.getByTestId('dance-pattern').allTextContents();
+	expect(patterns.length).toBeGreaterThan(0);
+	for (const p of patterns) expect(p).toMatch(/^32 counts · 4 walls · .*partner dance/);
+	const card = page
+		.getByTestId('dance-card')
+		.filter({ has: page.getByRole('link', { name: NAME }) });
+	await expect(card).toContainText(/^\s*\d+–\d+\s*BPM · [34]\/4/);
 	await page.goto('/dances?counts=32&walls=2');
 	await expect(page.getByRole('link', { name: NAME })).toHaveCount(0);
 	const api = await page.request.get(`/api/dances/${danceId}`);
