@@ -225,6 +225,16 @@ test('the desk view shows the current entry, the section time left and the sound
 	await expect(page.getByTestId('section-left')).toContainText('20:00 left in the section');
 	const caution = page.getByLabel('Sound level caution');
 	await expect(caution).toContainText('100 dB LAeq over any 15 minutes');
+	// The next rest: the first break the saved run order starts after 19:20 (1,200 s in), in
+	// whole minutes rounded up.
+	const order = await (await page.request.get('/api/evenings/1/run-order')).json();
+	const rest = (order.entries as { kind: string; startS: number }[]).find(
+		(e) => e.kind === 'break' && e.startS > 1200
+	);
+	if (rest) {
+		const minutes = Math.ceil((rest.startS - 1200) / 60);
+		await expect(page.getByTestId('desk-rest')).toHaveText(`In ${minutes} minutes`);
+	} else await expect(page.getByTestId('desk-rest')).toHaveText('No rest planned after this.');
 	// Next moves by hand; "Follow the clock" returns to the planned position.
 	const before = await now.textContent();
 	await page.getByRole('button', { name: 'Next' }).click();

@@ -49,3 +49,19 @@ describe('the desk follows the clock', () => {
 		expect(deskPosition([], [], 0)).toMatchObject({ phase: 'before', current: null, next: null });
 	});
 });
+
+describe('the next rest', () => {
+	// Entries at 0, 200 (a break of 300 s) and 500 s: the rest is 200 s away at the start, under
+	// way at 250 s (no wait), and after it none is left. Plain arithmetic.
+	const withRest = [
+		{ kind: 'dance', startS: 0, durationS: 180, sectionId: 1 },
+		{ kind: 'break', startS: 200, durationS: 300, sectionId: 1 },
+		{ kind: 'dance', startS: 500, durationS: 180, sectionId: 2 }
+	];
+	test('counts down to the next break, holds at 0 during it, and is null after', () => {
+		expect(deskPosition(withRest, sections, 60)).toMatchObject({ nextRest: 1, restInS: 140 });
+		expect(deskPosition(withRest, sections, -100)).toMatchObject({ nextRest: 1, restInS: 300 });
+		expect(deskPosition(withRest, sections, 250)).toMatchObject({ nextRest: 1, restInS: 0 });
+		expect(deskPosition(withRest, sections, 520)).toMatchObject({ nextRest: null, restInS: null });
+	});
+});

@@ -1,5 +1,6 @@
 // Where the evening is now, for the DJ's desk: the current and next entries by the clock against
-// the planned start times, the time left in the section, and the next announcement. Pure.
+// the planned start times, the time left in the section, the next announcement and the next
+// rest. Pure.
 
 export interface DeskEntry {
 	kind: string;
@@ -24,6 +25,9 @@ export interface DeskPosition {
 	/** Seconds left in the section the current entry belongs to. */
 	sectionLeftS: number | null;
 	nextAnnouncement: number | null;
+	/** The next break in the run order, and the seconds until it starts (by the planned start). */
+	nextRest: number | null;
+	restInS: number | null;
 }
 
 /** The entry playing at `atS` seconds from the evening's start (the last one that has begun). */
@@ -57,19 +61,22 @@ export function deskPosition(
 		phase === 'before' ? (n ? 0 : null) : current !== null && current + 1 < n ? current + 1 : null;
 	const cur = current !== null && phase !== 'before' ? entries[current] : null;
 	const section = cur ? sections.find((s) => s.id === cur.sectionId) : undefined;
-	let nextAnnouncement: number | null = null;
 	const from = phase === 'before' ? 0 : (current ?? 0) + 1;
-	for (let i = from; i < n; i++)
-		if (entries[i].kind === 'announcement') {
-			nextAnnouncement = i;
-			break;
-		}
+	const firstFrom = (kind: string) => {
+		for (let i = from; i < n; i++) if (entries[i].kind === kind) return i;
+		return null;
+	};
+	const nextAnnouncement = firstFrom('announcement');
+	// A rest under way counts as the rest: the floor is resting now.
+	const nextRest = cur?.kind === 'break' ? current : firstFrom('break');
 	return {
 		phase,
 		current: phase === 'before' ? null : current,
 		next,
 		entryLeftS: cur ? Math.max(0, cur.startS + cur.durationS - atS) : null,
 		sectionLeftS: section ? Math.max(0, section.endS - atS) : null,
-		nextAnnouncement
+		nextAnnouncement,
+		nextRest,
+		restInS: nextRest !== null ? Math.max(0, entries[nextRest].startS - atS) : null
 	};
 }

@@ -40,6 +40,8 @@ export interface EntryJson {
 	danceLevel: Level | null;
 	danceRhythm: Rhythm | null;
 	danceFormation: Formation | null;
+	danceCounts: number | null;
+	danceWalls: number | null;
 	trackId: number | null;
 	trackTitle: string | null;
 	trackArtist: string | null;
@@ -109,6 +111,8 @@ const statements = preparedFor((d) => {
 				danceLevel: dances.level,
 				danceRhythm: dances.rhythm,
 				danceFormation: dances.formation,
+				danceCounts: dances.counts,
+				danceWalls: dances.walls,
 				trackTitle: tracks.title,
 				trackArtist: tracks.artist,
 				trackBpm: tracks.bpm
@@ -153,6 +157,8 @@ export function loadEntries(eveningId: number, startsAtMs: number): EntryJson[] 
 			danceLevel: r.danceLevel ?? null,
 			danceRhythm: (r.danceRhythm as Rhythm | null) ?? null,
 			danceFormation: r.danceFormation ?? null,
+			danceCounts: r.danceCounts ?? null,
+			danceWalls: r.danceWalls ?? null,
 			trackId: e.trackId,
 			trackTitle: r.trackTitle ?? null,
 			trackArtist: r.trackArtist ?? null,
