@@ -413,3 +413,35 @@ test('removing a track says first which evenings and verdicts use it, then asks 
 	await dj.dispose();
 	await organiser.dispose();
 });
+
+// Issue 15, "Music on a phone": at 390 px a row shows its title, tempo and length with nothing to
+// scroll sideways, measured from the rendered page.
+test('on a phone the table shows title, tempo and length without sideways scrolling', async ({
+	page
+}) => {
+	// Signed in on a wide screen, where the sign-in helper finds its "Sign out" button.
+	await signIn(page, 'dj');
+	await page.setViewportSize({ width: 390, height: 844 });
+	await page.goto('/music');
+	await hydrated(page);
+	const row = grid(page).getByTestId('track-row').first();
+	await expect(row).toBeVisible();
+	for (const column of ['title', 'bpm', 'durationS']) {
+		const box = (await row.locator(`[data-column="${column}"]`).boundingBox())!;
+		expect(box.x, column).toBeGreaterThanOrEqual(0);
+		expect(box.x + box.width, column).toBeLessThanOrEqual(390);
+	}
+	await expect(row.locator('[data-column="artist"]')).toHaveCount(0);
+	await expect(row.locator('[data-column="durationS"]')).toHaveText(/^\d+:\d\d$/);
+	const sideways = await grid(page)
+		.locator('.overflow-auto')
+		.evaluate((el) => el.scrollWidth - el.clientWidth);
+	expect(sideways).toBeLessThanOrEqual(0);
+	expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+	// The header is one row: the name and a menu that holds the rest.
+	const header = (await page.locator('header').boundingBox())!;
+	expect(header.height).toBeLessThanOrEqual(80);
+	await page.getByTestId('phone-menu').getByText('Menu').click();
+	await page.getByTestId('phone-menu').getByRole('link', { name: 'Dances' }).click();
+	await expect(page).toHaveURL(/\/dances$/);
+});

@@ -155,6 +155,18 @@ export const columns: Col[] = [
 	}
 ];
 
+/**
+ * On a phone (under 640 px) the table keeps what a DJ looks a track up for: its title, tempo and
+ * length, the title taking what room is left; the rest are on the track page.
+ */
+export const PHONE_COLUMNS = new Set(['select', 'title', 'bpm', 'durationS']);
+export const PHONE_SIZES: Record<string, string> = {
+	select: '2.75rem',
+	title: 'minmax(0, 1fr)',
+	bpm: 'minmax(4rem, auto)',
+	durationS: '3.5rem'
+};
+
 /** Columns shown at first; the rest are a click away in the column chooser. */
 export const INITIAL_HIDDEN = {
 	album: false,
