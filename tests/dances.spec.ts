@@ -107,10 +107,22 @@ test('the instructor previews a slowed track for a beginners’ lesson', async (
 	// 15 % below 110 BPM (the fit engine's beginner slow-down, common teaching practice).
 	await expect(page.getByTestId('lesson-target')).toContainText('93.5 BPM');
 	await expect(page.getByTestId('pacing-caution')).toBeVisible();
-	// Some fitting tracks are refused with the reason (past the 0.80× bound) …
-	await expect(page.locator('[data-testid="slowed"][data-ok="false"]').first()).toContainText(
-		'Refused'
+	// Tracks already slow enough come nearest to the target first.
+	const counted = (await page.getByTestId('slow-enough').allTextContents()).map((t) =>
+		Number(/([\d.]+) BPM as counted/.exec(t)?.[1])
 	);
+	const gaps = counted.map((b) => Math.abs(b - 93.5));
+	expect(gaps).toEqual([...gaps].sort((a, b) => a - b));
+	// Some fitting tracks are refused with the reason (past the 0.80× bound), folded under one
+	// line that says how many …
+	const unreachable = page.getByTestId('unreachable');
+	await expect(unreachable.locator('summary')).toContainText(
+		/^\s*\d+\s+tracks? cannot reach 93.5 BPM/
+	);
+	await unreachable.locator('summary').click();
+	await expect(
+		unreachable.locator('[data-testid="slowed"][data-ok="false"]').first()
+	).toContainText('Refused');
 	// … and a fitting track within it previews at the rate that reaches the target.
 	const button = page.locator('[data-testid="slowed"][data-ok="true"] button').first();
 	const rate = Number(await button.getAttribute('data-rate'));
@@ -127,6 +139,14 @@ test('the instructor previews a slowed track for a beginners’ lesson', async (
 	expect(audio.rate).toBeCloseTo(rate, 3);
 	expect(audio.pitch).toBe(true);
 	expect(audio.src).toMatch(/^\/api\/tracks\/\d+\/audio$/);
+	// The preview closes: the sound stops and the player leaves the bottom of the screen.
+	await page.getByRole('button', { name: 'Close the preview' }).click();
+	await expect(page.getByTestId('now-previewing')).toContainText('Choose a preview below');
+	expect(
+		await page
+			.getByTestId('preview-audio')
+			.evaluate((el: HTMLAudioElement) => [el.paused, el.getAttribute('src')])
+	).toEqual([true, null]);
 
 	// A standing request for slower music reaches the DJ's list.
 	await page.getByLabel('Message (optional)').fill('Nearer 90 for the taster night, please.');
@@ -142,6 +162,8 @@ test('the DJ sees the request and marks it done', async ({ page }) => {
 		.getByTestId('request')
 		.filter({ hasText: 'Nearer 90 for the taster night, please.' });
 	await expect(item).toContainText(`Slower music for ${NAME}`);
+	// The request carries the lesson's target, worked out on the server as the page showed it.
+	await expect(item).toContainText('For a beginner lesson: about 93.5 BPM.');
 	await item.getByRole('button', { name: 'Mark done' }).click();
 	await expect(item.getByTestId('request-status')).toHaveText('Done');
 });

@@ -1,11 +1,13 @@
 import { error, fail } from '@sveltejs/kit';
 import { z } from 'zod';
-import { LEVELS, type Level } from '$lib/domain';
-import { DEFAULT_LESSON_SETTINGS } from '$lib/fit';
+import { LEVEL_LABELS, LEVELS, type Level } from '$lib/domain';
+import { DEFAULT_LESSON_SETTINGS, lessonTarget } from '$lib/fit';
 import { holds, requireRight } from '$lib/server/guard';
 import { idParam } from '$lib/route-id';
+import { getDance } from '$lib/server/dances/catalogue';
 import { openSlowerMusicRequests, requestSlowerMusic } from '$lib/server/dances/requests';
 import { lessonMusic } from '$lib/server/fits/lesson';
+import { lessonSettings } from '$lib/server/fits/settings';
 import { fitsForDance } from '$lib/server/fits/ranking';
 import { setVerdict } from '$lib/server/fits/verdicts';
 import { fitVerdictSchema } from '$lib/schemas/dance';
@@ -16,7 +18,9 @@ import type { Actions, PageServerLoad } from './$types';
 const SHOWN = 30;
 
 const requestSchema = z.object({
-	message: blockText(500, 'message').trim()
+	message: blockText(500, 'message').trim(),
+	/** The crowd's level the lesson music was shown for: the request names its target tempo. */
+	level: z.enum(LEVELS).optional()
 });
 
 export const load = ((event) => {
@@ -76,12 +80,23 @@ export const actions = {
 		const danceId = idParam(event.params.id);
 		if (!danceId) error(404, 'No such dance.');
 		const form = await event.request.formData();
-		const parsed = requestSchema.safeParse({ message: form.get('message') ?? '' });
+		const parsed = requestSchema.safeParse({
+			message: form.get('message') ?? '',
+			level: form.get('level') || undefined
+		});
 		if (!parsed.success) {
 			return fail(400, { requestError: parsed.error.issues[0]?.message ?? 'Not a request.' });
 		}
+		const dance = getDance(danceId);
+		if (!dance) error(404, 'No such dance.');
+		// The target is worked out here, as the page showed it, not taken from the form.
+		const { level, message } = parsed.data;
+		const target = level ? lessonTarget(dance, level, lessonSettings()).targetBpm : null;
+		const said = target
+			? `For a ${LEVEL_LABELS[level!].toLowerCase()} lesson: about ${target} BPM.${message ? ` ${message}` : ''}`
+			: message;
 		try {
-			requestSlowerMusic(danceId, parsed.data.message, me);
+			requestSlowerMusic(danceId, said, me);
 		} catch {
 			// The dance was deleted meanwhile (the foreign key refuses the row).
 			error(404, 'No such dance.');
