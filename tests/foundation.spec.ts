@@ -89,7 +89,11 @@ async function inviteAndJoin(page: Page, browser: Browser, name: string, email: 
 	await guest.getByLabel('E-mail').fill(email);
 	await guest.getByLabel('Password').fill('a-long-new-password');
 	await guest.getByRole('button', { name: 'Sign in' }).click();
-	await expect(guest.getByTestId('who')).toContainText(`${name} · dancer`);
+	await expect(guest.getByTestId('who')).toContainText(`${name} · Dancer`);
+	// A dancer's home page speaks to dancers, not to the team that runs the night.
+	await guest.goto('/');
+	await expect(guest.getByText('ask the DJ for a dance you would like to hear')).toBeVisible();
+	await expect(guest.getByText('Plan the run order')).toHaveCount(0);
 	return { guest, link: link! };
 }
 
@@ -224,7 +228,7 @@ test('a member who forgot their password sets a new one by e-mail, and their oth
 	await other.getByLabel('E-mail').fill(email);
 	await other.getByLabel('Password').fill('a-second-long-password');
 	await other.getByRole('button', { name: 'Sign in' }).click();
-	await expect(other.getByTestId('who')).toContainText('Pip Forgetful · dancer');
+	await expect(other.getByTestId('who')).toContainText('Pip Forgetful · Dancer');
 
 	// The session from before the reset is over; the link does not work twice.
 	await elsewhere.goto('/evenings');

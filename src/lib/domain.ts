@@ -4,6 +4,19 @@
 export const ROLES = ['admin', 'organiser', 'dj', 'instructor', 'dancer'] as const;
 export type Role = (typeof ROLES)[number];
 
+/** The roles as the screens name them. */
+export const ROLE_LABELS: Record<Role, string> = {
+	admin: 'Admin',
+	organiser: 'Organiser',
+	dj: 'DJ',
+	instructor: 'Instructor',
+	dancer: 'Dancer'
+};
+
+/** "DJ, Instructor": a person's roles in the screens' words. */
+export const roleWords = (roles: readonly string[]) =>
+	roles.map((r) => ROLE_LABELS[r as Role] ?? r).join(', ');
+
 export const LEVELS = [
 	'absolute-beginner',
 	'beginner',
