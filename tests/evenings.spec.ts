@@ -363,7 +363,7 @@ test('swap a track for another that fits the same dance, insert and remove entri
 	await expect(offers.first()).toBeVisible();
 	// Songs already in tonight's order come last, each marked with the entry that plays it.
 	const anyway = page.getByRole('button', { name: /^Use anyway / });
-	await expect(page.getByText(/^already played tonight \(entry \d+\)$/)).toHaveCount(
+	await expect(page.getByText(/^already in this night’s order \(entry \d+\)$/)).toHaveCount(
 		await anyway.count()
 	);
 	const plain = await page.getByRole('button', { name: /^Use (?!anyway )/ }).count();
