@@ -15,6 +15,7 @@ test('minutes:seconds rounds to the whole second before splitting', () => {
 test('clock times and dates in the club’s zone, 24-hour, day before month', () => {
 	const winter = Date.parse('2026-12-04T19:05:00Z');
 	expect(clock(winter, 'Europe/London')).toBe('19:05');
+	expect(clock(winter + 9000, 'Europe/London', true)).toBe('19:05:09');
 	expect(shortDate(winter, 'Europe/London')).toBe('4 Dec 2026');
 	expect(dateTime(winter, 'Europe/London')).toBe('4 Dec 2026, 19:05');
 	expect(longDate(winter, 'Europe/London')).toBe('Friday, 4 December 2026');

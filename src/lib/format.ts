@@ -8,36 +8,26 @@ export function minutesSeconds(seconds: number): string {
 	return `${Math.floor(s / 60)}:${String(s % 60).padStart(2, '0')}`;
 }
 
-/** "19:05" for an instant in the club's zone. */
-export function clock(ms: number, timeZone: string): string {
-	return new Intl.DateTimeFormat('en-GB', {
-		timeZone,
+/** An instant written in British English in the club's zone, with the parts `parts` asks for. */
+const inZone = (ms: number, timeZone: string, parts: Intl.DateTimeFormatOptions) =>
+	new Intl.DateTimeFormat('en-GB', { timeZone, ...parts }).format(new Date(ms));
+
+/** "19:05" (or "19:05:09" with seconds, for a running clock) for an instant in the club's zone. */
+export const clock = (ms: number, timeZone: string, seconds = false) =>
+	inZone(ms, timeZone, {
 		hour: '2-digit',
 		minute: '2-digit',
+		second: seconds ? '2-digit' : undefined,
 		hourCycle: 'h23'
-	}).format(new Date(ms));
-}
+	});
 
 /** "Friday, 11 December 2026" (as Intl writes it) in the club's zone. */
-export function longDate(ms: number, timeZone: string): string {
-	return new Intl.DateTimeFormat('en-GB', {
-		timeZone,
-		weekday: 'long',
-		day: 'numeric',
-		month: 'long',
-		year: 'numeric'
-	}).format(new Date(ms));
-}
+export const longDate = (ms: number, timeZone: string) =>
+	inZone(ms, timeZone, { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' });
 
 /** "4 Dec 2026", in the club's zone. */
-export function shortDate(ms: number, timeZone: string): string {
-	return new Intl.DateTimeFormat('en-GB', {
-		timeZone,
-		day: 'numeric',
-		month: 'short',
-		year: 'numeric'
-	}).format(new Date(ms));
-}
+export const shortDate = (ms: number, timeZone: string) =>
+	inZone(ms, timeZone, { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** "4 Dec 2026, 19:05": when something happened, in the club's zone. */
 export const dateTime = (ms: number, timeZone: string) =>

@@ -1,25 +1,13 @@
 // JSON answers that depend only on the database and the request's own words (not on who asks,
-// once the route's right is checked), kept until the next write to the tables they read. Many people open the same
-// music table and the same dance's fits; each ranking or page is computed once per change.
+// once the route's right is checked), kept until the next write to the tables they read. Many
+// people open the same music table and the same dance's fits; each ranking or page is computed
+// once per change.
 import { db } from '../db';
-import { changeStamp, type CountedTable } from './change-stamp';
+import { changeStamp, CONTENT_TABLES } from './change-stamp';
 import { CachedBody } from './cached-body';
 import { StampedCache } from './stamped-cache';
 
 const encoder = new TextEncoder();
-
-/** What the kept answers read: the library, the catalogue, the fits and the evenings. */
-export const CONTENT_TABLES: readonly CountedTable[] = [
-	'users',
-	'tracks',
-	'dances',
-	'fits',
-	'settings',
-	'evenings',
-	'sections',
-	'run_order_entries',
-	'requests'
-];
 
 /** 32 MB of kept answers at most: a few hundred music-table pages. */
 export const jsonCache = new StampedCache<CachedBody>(32 * 1024 * 1024);

@@ -20,6 +20,22 @@ export type CountedTable =
 	| 'run_order_entries'
 	| 'requests';
 
+/**
+ * What the JSON answers and the public page read: the library, the catalogue, the fits, the
+ * evenings and the names of the people in them.
+ */
+export const CONTENT_TABLES: readonly CountedTable[] = [
+	'users',
+	'tracks',
+	'dances',
+	'fits',
+	'settings',
+	'evenings',
+	'sections',
+	'run_order_entries',
+	'requests'
+];
+
 interface Readers {
 	serial: number;
 	versions: Database.Statement<[string], string | null>;

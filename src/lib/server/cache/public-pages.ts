@@ -1,16 +1,15 @@
 // A published evening's page is read by a hall full of dancers scanning the same QR code, nearly
 // all signed out, and every one of them gets the same page. That page is rendered once per
-// change to the tables it reads and then served as it was. Only signed-out GETs of the public evening pages
-// are kept (no session cookie, no query), and only when no write overlapped the rendering. The
+// change to the tables it reads and then served as it was. Only signed-out GETs of the public
+// evening pages are kept (no session cookie, no query), and only when no write overlapped the rendering. The
 // Content-Security-Policy uses hashes (svelte.config.js), not a per-response nonce, so a page
 // served twice weakens nothing.
 import { createHash } from 'node:crypto';
 import type { Handle } from '@sveltejs/kit';
 import { db } from '../db';
 import { clearing, sessionCookieNames } from '../session-cookie';
-import { changeStamp } from './change-stamp';
+import { changeStamp, CONTENT_TABLES } from './change-stamp';
 import { CachedBody } from './cached-body';
-import { CONTENT_TABLES } from './cached-json';
 import { StampedCache } from './stamped-cache';
 
 interface CachedPage {

@@ -1,7 +1,6 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { holds, requireRight } from '$lib/server/guard';
-import { clubTimeZone } from '$lib/server/evenings/timezone';
 import { deleteTrack, getTrack } from '$lib/server/tracks';
 import { trackUsage } from '$lib/server/tracks/usage';
 import { idParam } from '$lib/route-id';
@@ -18,8 +17,7 @@ export const load = ((event) => {
 		canEdit,
 		canJudge: holds(user, 'fits'),
 		// Said before a removal, to the people who may remove.
-		usage: canEdit ? trackUsage(track.id) : null,
-		timeZone: clubTimeZone()
+		usage: canEdit ? trackUsage(track.id) : null
 	};
 }) satisfies PageServerLoad;
 
